@@ -1,0 +1,14 @@
+/** Every screen's address in one place, so links and routes cannot drift apart. */
+export const paths = {
+  home: '/',
+  signIn: '/sign-in',
+  forgotPassword: '/forgot-password',
+  resetPassword: '/reset-password',
+  invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
+  engagements: '/engagements',
+  engagement: (id: number | string) => `/engagements/${id}`,
+  adminUsers: '/admin/users',
+  adminEngagements: '/admin/engagements',
+  audit: '/admin/audit',
+  mailbox: '/admin/mailbox',
+} as const;

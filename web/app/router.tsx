@@ -1,0 +1,61 @@
+import { createBrowserRouter, Navigate } from 'react-router-dom';
+import { AppLayout } from './app-layout';
+import { lazyScreen } from './lazy-screen';
+import { NotFoundScreen } from './not-found-screen';
+import { paths } from './paths';
+import { PublicLayout } from './public-layout';
+import { RequireRole } from './require-role';
+import { RequireSession } from './require-session';
+import { RouteErrorScreen } from './route-error-screen';
+
+// Every screen is its own chunk: the first screen loads only the shell and itself.
+const SignInScreen = lazyScreen(() => import('../features/auth/components/sign-in-screen'), 'SignInScreen');
+const ForgotPasswordScreen = lazyScreen(() => import('../features/auth/components/forgot-password-screen'), 'ForgotPasswordScreen');
+const ResetPasswordScreen = lazyScreen(() => import('../features/auth/components/reset-password-screen'), 'ResetPasswordScreen');
+const AcceptInvitationScreen = lazyScreen(() => import('../features/auth/components/accept-invitation-screen'), 'AcceptInvitationScreen');
+const EngagementsScreen = lazyScreen(() => import('../features/engagements/components/engagements-screen'), 'EngagementsScreen');
+const EngagementOverviewScreen = lazyScreen(() => import('../features/engagements/components/engagement-overview-screen'), 'EngagementOverviewScreen');
+const AdminEngagementsScreen = lazyScreen(() => import('../features/engagements/components/admin-engagements-screen'), 'AdminEngagementsScreen');
+const AdminUsersScreen = lazyScreen(() => import('../features/users/components/admin-users-screen'), 'AdminUsersScreen');
+const AuditScreen = lazyScreen(() => import('../features/audit/components/audit-screen'), 'AuditScreen');
+const MailboxScreen = lazyScreen(() => import('../features/mailbox/components/mailbox-screen'), 'MailboxScreen');
+
+export const router = createBrowserRouter([
+  {
+    errorElement: <RouteErrorScreen />,
+    children: [
+      {
+        element: <PublicLayout />,
+        children: [
+          { path: paths.signIn, element: <SignInScreen /> },
+          { path: paths.forgotPassword, element: <ForgotPasswordScreen /> },
+          { path: paths.resetPassword, element: <ResetPasswordScreen /> },
+          { path: `${paths.resetPassword}/:token`, element: <ResetPasswordScreen /> },
+          { path: '/invitations/:token', element: <AcceptInvitationScreen /> },
+        ],
+      },
+      {
+        element: (
+          <RequireSession>
+            <AppLayout />
+          </RequireSession>
+        ),
+        children: [
+          { index: true, element: <Navigate to={paths.engagements} replace /> },
+          { path: paths.engagements, element: <EngagementsScreen /> },
+          { path: '/engagements/:id', element: <EngagementOverviewScreen /> },
+          {
+            element: <RequireRole roles={['admin']} />,
+            children: [
+              { path: paths.adminUsers, element: <AdminUsersScreen /> },
+              { path: paths.adminEngagements, element: <AdminEngagementsScreen /> },
+              { path: paths.audit, element: <AuditScreen /> },
+              { path: paths.mailbox, element: <MailboxScreen /> },
+            ],
+          },
+          { path: '*', element: <NotFoundScreen /> },
+        ],
+      },
+    ],
+  },
+]);

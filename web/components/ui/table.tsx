@@ -1,0 +1,39 @@
+import type { ReactNode, ThHTMLAttributes, TdHTMLAttributes } from 'react';
+
+interface TableProps {
+  /** Read by screen readers; shown only when `showCaption` is set. */
+  caption: string;
+  showCaption?: boolean;
+  children: ReactNode;
+}
+
+/** A quiet table: ruled rows, no zebra, numbers right-aligned by `Th`/`Td` with `num`. */
+export function Table({ caption, showCaption = false, children }: TableProps) {
+  return (
+    <div className="overflow-x-auto rounded-lg border border-rule bg-sheet">
+      <table className="w-full border-collapse text-sm">
+        <caption className={showCaption ? 'px-4 py-3 text-left font-serif text-base' : 'sr-only'}>{caption}</caption>
+        {children}
+      </table>
+    </div>
+  );
+}
+
+interface CellProps {
+  /** Right-aligns a numeric column with tabular figures. */
+  num?: boolean;
+}
+
+export function Th({ num, className = '', ...rest }: CellProps & ThHTMLAttributes<HTMLTableCellElement>) {
+  return (
+    <th
+      scope="col"
+      className={`border-b border-rule-strong px-4 py-2.5 text-left text-xs font-semibold tracking-wide text-ink-soft uppercase ${num ? 'num' : ''} ${className}`}
+      {...rest}
+    />
+  );
+}
+
+export function Td({ num, className = '', ...rest }: CellProps & TdHTMLAttributes<HTMLTableCellElement>) {
+  return <td className={`border-b border-rule px-4 py-3 align-top ${num ? 'num' : ''} ${className}`} {...rest} />;
+}

@@ -1,0 +1,24 @@
+import type { AuditAction } from '#shared/schemas/audit';
+
+/** Plain words for each recorded event. */
+export const AUDIT_ACTION_LABELS: Record<AuditAction, string> = {
+  sign_in: 'Signed in',
+  sign_in_failed: 'Sign-in refused',
+  sign_out: 'Signed out',
+  password_reset_requested: 'Password reset requested',
+  password_reset_completed: 'Password reset completed',
+  user_invited: 'Person invited',
+  invitation_accepted: 'Invitation accepted',
+  user_role_changed: 'Role changed',
+  user_deactivated: 'Person deactivated',
+  user_reactivated: 'Person reactivated',
+  user_renamed: 'Person renamed',
+  engagement_created: 'Engagement created',
+  engagement_updated: 'Engagement updated',
+  member_added: 'Member added',
+  member_removed: 'Member removed',
+};
+
+export function auditActionLabel(action: string): string {
+  return (AUDIT_ACTION_LABELS as Record<string, string>)[action] ?? action.replaceAll('_', ' ');
+}

@@ -1,0 +1,62 @@
+import { useState, type FormEvent } from 'react';
+import { useQuery } from '@tanstack/react-query';
+import { addMemberSchema } from '#shared/schemas/engagements';
+import { ROLE_LABELS } from '#shared/schemas/roles';
+import { Banner } from '../../../components/ui/banner';
+import { Button } from '../../../components/ui/button';
+import { SelectField } from '../../../components/ui/select-field';
+import { useToast } from '../../../components/ui/use-toast';
+import { useFormErrors } from '../../../lib/use-form-errors';
+import { userListQuery } from '../../users/api/user-queries';
+import { useAddMember } from '../api/engagement-mutations';
+
+const FIELDS = ['userId'] as const;
+
+/** Administrators pick anyone with an account who is not already a member and not deactivated. */
+export function AddMemberForm({ engagementId, memberIds }: { engagementId: number; memberIds: number[] }) {
+  const users = useQuery(userListQuery());
+  const add = useAddMember(engagementId);
+  const form = useFormErrors(FIELDS);
+  const toast = useToast();
+  const [userId, setUserId] = useState('');
+
+  const candidates = (users.data ?? [])
+    .filter((u) => u.status !== 'deactivated' && !memberIds.includes(u.id))
+    .sort((a, b) => a.name.localeCompare(b.name))
+    .map((u) => ({ value: String(u.id), label: `${u.name} · ${ROLE_LABELS[u.role]}${u.status === 'invited' ? ' (invited)' : ''}` }));
+
+  function submit(e: FormEvent) {
+    e.preventDefault();
+    const body = form.validate(addMemberSchema, { userId: userId ? Number(userId) : undefined });
+    if (!body) return;
+    add.mutate(body.userId, {
+      onSuccess: (member) => {
+        toast.show(`${member.name} added.`, 'ok');
+        setUserId('');
+      },
+      onError: form.fromError,
+    });
+  }
+
+  return (
+    <form onSubmit={submit} noValidate className="mt-6 rounded-lg border border-rule bg-sheet px-5 py-5">
+      <h3 className="mb-3 font-sans text-sm font-semibold">Add a member</h3>
+      {form.formError && <Banner tone="danger">{form.formError}</Banner>}
+      {users.isError && <Banner tone="danger">The list of people could not be loaded: {users.error.message}</Banner>}
+      <div className="flex flex-wrap items-end gap-3">
+        <SelectField
+          label="Person"
+          className="min-w-64 flex-1"
+          value={userId}
+          onValueChange={setUserId}
+          placeholder={users.isPending ? 'Loading people…' : candidates.length ? 'Choose a person' : 'Everyone is already a member'}
+          options={candidates}
+          error={form.fieldErrors.userId}
+        />
+        <Button type="submit" variant="primary" busy={add.isPending} disabled={!candidates.length}>
+          Add to engagement
+        </Button>
+      </div>
+    </form>
+  );
+}
