@@ -10,23 +10,42 @@ export interface QueueIssue {
   message: string;
 }
 
+/**
+ * Machine-readable facts about an `unstable` error: the offered utilisation ρ and the smallest
+ * number of servers (or the largest arrival rate) that would make the model stable.
+ */
+export interface QueueErrorDetails {
+  rho?: number;
+  minServers?: number;
+  maxArrivalRate?: number;
+  node?: number;
+}
+
 export class QueueError extends Error {
   readonly code: QueueErrorCode;
   readonly issues: QueueIssue[];
+  readonly details?: QueueErrorDetails;
 
-  constructor(code: QueueErrorCode, message: string, issues: QueueIssue[] = []) {
+  constructor(code: QueueErrorCode, message: string, issues: QueueIssue[] = [], details?: QueueErrorDetails) {
     super(message);
     this.name = 'QueueError';
     this.code = code;
     this.issues = issues;
+    if (details) this.details = details;
   }
 
-  toJSON(): { code: QueueErrorCode; message: string; issues: QueueIssue[] } {
-    return { code: this.code, message: this.message, issues: this.issues };
+  toJSON(): { code: QueueErrorCode; message: string; issues: QueueIssue[]; details?: QueueErrorDetails } {
+    const body = { code: this.code, message: this.message, issues: this.issues };
+    return this.details ? { ...body, details: this.details } : body;
   }
 }
 
 /** Shorthand for an invalid_input error about one field. */
 export function invalidInput(path: string, message: string): QueueError {
   return new QueueError('invalid_input', `${path}: ${message}`, [{ path, message }]);
+}
+
+/** Shorthand for an `unstable` error about one field, with ρ and the capacity stability needs. */
+export function unstable(path: string, message: string, details: QueueErrorDetails): QueueError {
+  return new QueueError('unstable', message, [{ path, message }], details);
 }
