@@ -1,0 +1,88 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { configurePassport } from './auth/passport-setup';
+import type { AppContext } from './context';
+import { HttpError } from './http-error';
+import { csrfGuard } from './middleware/csrf';
+import { errorHandler } from './middleware/error-handler';
+import { auditRouter } from './routes/audit/audit.router';
+import { authRouter } from './routes/auth/auth.router';
+import { engagementsRouter } from './routes/engagements/engagements.router';
+import { healthRouter } from './routes/health/health.router';
+import { invitationsRouter } from './routes/invitations/invitations.router';
+import { mailboxRouter } from './routes/mailbox/mailbox.router';
+import { usersRouter } from './routes/users/users.router';
+
+export const SESSION_COOKIE = 'sojourn.sid';
+
+/** Builds the Express app (no listen): API under /api, the built web app for everything else. */
+export function createApp(ctx: AppContext): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  if (ctx.config.trustProxy) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          // vega-embed and React set inline style attributes; no inline scripts are allowed.
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          frameAncestors: ["'none'"],
+          formAction: ["'self'"],
+          upgradeInsecureRequests: ctx.config.cookieSecure ? [] : null,
+        },
+      },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '2mb' }));
+  api.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: ctx.config.sessionSecret,
+      store: ctx.sessionStore,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: ctx.config.cookieSecure, maxAge: 12 * 3600_000 },
+    }),
+  );
+  const passport = configurePassport(ctx.db);
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(csrfGuard(ctx.config.publicUrl));
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+
+  api.use(healthRouter(ctx));
+  api.use(authRouter(ctx, passport));
+  api.use(invitationsRouter(ctx));
+  api.use(usersRouter(ctx));
+  api.use(engagementsRouter(ctx));
+  api.use(auditRouter(ctx));
+  api.use(mailboxRouter(ctx));
+  api.use((req) => {
+    throw new HttpError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
+  });
+  app.use('/api', api);
+
+  const dist = ctx.config.webDist;
+  if (dist && existsSync(join(dist, 'index.html'))) {
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    // Client-side routes: every non-API GET gets the app shell.
+    app.get('/{*splat}', (_req, res) => res.sendFile(join(dist, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}

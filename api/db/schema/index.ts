@@ -1,0 +1,4 @@
+export * from './users';
+export * from './engagements';
+export * from './audit';
+export * from './sessions';

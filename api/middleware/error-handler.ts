@@ -1,0 +1,46 @@
+import type { ErrorRequestHandler } from 'express';
+import { ZodError } from 'zod';
+import type { ApiErrorBody } from '../../shared/api-error';
+import { QueueError } from '../../shared/queue/errors';
+import { HttpError } from '../http-error';
+
+/** Dotted path as the web forms expect ("members.0.email"). */
+export function zodIssues(err: ZodError): { path: string; message: string }[] {
+  return err.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
+}
+
+const DB_DOWN = new Set(['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ECONNRESET', 'ER_CON_COUNT_ERROR']);
+
+function toBody(err: unknown): { status: number; body: ApiErrorBody } {
+  if (err instanceof HttpError) {
+    return { status: err.status, body: { error: { code: err.code, message: err.message, ...(err.issues ? { issues: err.issues } : {}) } } };
+  }
+  if (err instanceof ZodError) {
+    const issues = zodIssues(err);
+    const first = issues[0];
+    const message = first ? `${first.path || 'body'}: ${first.message}` : 'The request is not valid.';
+    return { status: 400, body: { error: { code: 'validation_failed', message, issues } } };
+  }
+  if (err instanceof QueueError) {
+    return { status: 422, body: { error: { code: err.code, message: err.message, issues: err.issues } } };
+  }
+  const e = err as { type?: string; code?: string; status?: number };
+  if (e.type === 'entity.too.large') {
+    return { status: 413, body: { error: { code: 'payload_too_large', message: 'The request body is too large.' } } };
+  }
+  if (e.type === 'entity.parse.failed') {
+    return { status: 400, body: { error: { code: 'validation_failed', message: 'The request body is not valid JSON.' } } };
+  }
+  if (e.code && DB_DOWN.has(e.code)) {
+    return { status: 503, body: { error: { code: 'unavailable', message: 'The database is unavailable; try again in a few seconds.' } } };
+  }
+  return { status: 500, body: { error: { code: 'internal', message: 'Something went wrong on the server. It has been logged.' } } };
+}
+
+/** Registered last: every failure leaves with the one error body of shared/api-error.ts. */
+export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  const { status, body } = toBody(err);
+  if (status >= 500 && status !== 503) console.error(`[api] ${req.method} ${req.originalUrl}`, err);
+  if (res.headersSent) return;
+  res.status(status).json(body);
+};

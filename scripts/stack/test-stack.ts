@@ -1,0 +1,83 @@
+/**
+ * `npm test`: a throwaway stack (own data folder, free ports), then typecheck, lint and every
+ * vitest project (unit, integration, e2e), then tear-down. Exit code is non-zero on any failure.
+ */
+import { spawn, spawnSync } from 'node:child_process';
+import { existsSync, rmSync } from 'node:fs';
+import { join, resolve } from 'node:path';
+import { bootStack } from './boot-stack';
+import { aptInstall } from './mariadb';
+import { freePort } from './ports';
+import { buildWebIfStale } from './web-build';
+import { waitForHttp } from './wait-http';
+
+const root = resolve(import.meta.dirname, '../..');
+const log = (s: string): void => console.log(`[test] ${s}`);
+const t0 = Date.now();
+const vitestArgs = process.argv.slice(2);
+
+function ensureTestTools(): void {
+  const missing = [
+    ['/usr/bin/chromium', 'chromium'],
+    ['/usr/bin/pdftotext', 'poppler-utils'],
+  ].filter(([bin]) => !existsSync(bin!)).map(([, pkg]) => pkg!);
+  if (missing.length === 0) return;
+  if (process.getuid?.() !== 0) throw new Error(`Install these first: sudo apt-get install -y ${missing.join(' ')}`);
+  log(`Installing ${missing.join(', ')} from Debian packages…`);
+  aptInstall(missing);
+}
+
+function step(name: string, cmd: string[], env: NodeJS.ProcessEnv = process.env): boolean {
+  const s = Date.now();
+  log(`${name}…`);
+  const r = spawnSync(process.execPath, cmd, { cwd: root, stdio: 'inherit', env });
+  log(`${name}: ${r.status === 0 ? 'passed' : 'FAILED'} (${((Date.now() - s) / 1000).toFixed(1)} s)`);
+  return r.status === 0;
+}
+
+const dataDir = join(root, '.test-data', `run-${process.pid}`);
+let stack: Awaited<ReturnType<typeof bootStack>> | null = null;
+let server: ReturnType<typeof spawn> | null = null;
+let ok = true;
+const cleanup = async (): Promise<void> => {
+  server?.kill('SIGTERM');
+  await stack?.stop();
+  rmSync(dataDir, { recursive: true, force: true });
+};
+process.on('SIGINT', () => void cleanup().then(() => process.exit(130)));
+
+try {
+  ensureTestTools();
+  const bin = (p: string): string => join(root, 'node_modules', p);
+  ok = step('typecheck', [bin('typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json']) && ok;
+  ok = step('lint', [bin('eslint/bin/eslint.js'), '.', '--max-warnings=0']) && ok;
+
+  const [dbPort, s3Port, smtpPort, mailFakePort, appPort] = await Promise.all([freePort(), freePort(), freePort(), freePort(), freePort()]);
+  const demoPassword = 'sojourn-demo';
+  stack = await bootStack({ dataDir, dbPort, s3Port, smtpPort, mailFakePort, dbPassword: 'test-only-password', demoPassword, allDatabases: true, log });
+  const webDist = buildWebIfStale(root, log);
+  const appUrl = `http://127.0.0.1:${appPort}`;
+  const env = {
+    ...process.env,
+    ...stack.env,
+    SESSION_SECRET: 'test-session-secret-that-is-long-enough-0123456789',
+    PUBLIC_URL: appUrl,
+    SOJOURN_URL: appUrl,
+    TEST_DATA_DIR: dataDir,
+    NODE_ENV: 'test',
+  };
+  server = spawn(process.execPath, ['--import', 'tsx', join(root, 'api/server.ts')], {
+    cwd: root,
+    env: { ...env, PORT: String(appPort), WEB_DIST: webDist },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  await waitForHttp(`${appUrl}/api/health`);
+  ok = step('vitest', [bin('vitest/vitest.mjs'), 'run', ...vitestArgs], env) && ok;
+} catch (err) {
+  console.error(`[test] ${(err as Error).message}`);
+  ok = false;
+} finally {
+  await cleanup();
+}
+log(`${ok ? 'All passed' : 'FAILED'} in ${((Date.now() - t0) / 1000).toFixed(0)} s`);
+process.exit(ok ? 0 : 1);

@@ -1,0 +1,14 @@
+import { z } from 'zod';
+
+/** A message caught by the local SMTP fake (development and demo only). */
+export const caughtMailSchema = z.object({
+  id: z.string(),
+  receivedAt: z.string(),
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  text: z.string(),
+  /** Links found in the text, so a person can follow invitation and reset links. */
+  links: z.array(z.string()),
+});
+export type CaughtMail = z.infer<typeof caughtMailSchema>;
