@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { exactMmck } from '../testing/decimal-reference';
 import { expectRel } from '../testing/expect-close';
+import { simpson } from '../testing/integrate';
 import { mmc } from './mmc';
 import { mmck } from './mmck';
 
@@ -46,13 +47,7 @@ describe('M/M/c/K', () => {
 
   it('integrates its waiting-time tail to Wq', () => {
     const spec = { arrivalRate: 14, serviceRate: 1, servers: 10, capacity: 25 };
-    const h = 0.002;
-    let integral = 0;
-    for (let x = 0; x < 20; x += h) {
-      const f0 = mmck({ ...spec, t: x }).probWqGreaterT as number;
-      const f1 = mmck({ ...spec, t: x + h }).probWqGreaterT as number;
-      integral += (h * (f0 + f1)) / 2;
-    }
+    const integral = simpson((x) => mmck({ ...spec, t: x }).probWqGreaterT as number, 20, 2000);
     expectRel(integral, mmck(spec).Wq as number, 1e-5);
   });
 
