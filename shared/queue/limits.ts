@@ -15,6 +15,15 @@ export const MAX_NODES = 200;
 export const MAX_SWEEP_POINTS = 10_000;
 /** Largest number of intervals in a demand profile. */
 export const MAX_INTERVALS = 10_000;
+/** Smallest and largest rate accepted (per time unit of the spec); keeps every product and quotient finite. */
+export const MIN_RATE = 1e-12;
+export const MAX_RATE = 1e12;
+/** Largest waiting-time threshold t (in the time unit of the spec). */
+export const MAX_TIME = 1e12;
+/** Largest squared coefficient of variation. */
+export const MAX_SCV = 1e6;
+/** Largest cost per time unit. */
+export const MAX_COST = 1e15;
 /** Utilisation above which results carry a `high_utilisation` warning (common practice: 85 %). */
 export const HIGH_UTILISATION = 0.85;
 /** Utilisation above which results carry a `heavy_traffic` warning. */

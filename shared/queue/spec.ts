@@ -3,12 +3,31 @@
  * builds its forms from them (with catalog.ts for labels and units); types come from z.infer.
  */
 import { z } from 'zod';
-import { MAX_CAPACITY, MAX_INTERVALS, MAX_NODES, MAX_SERVERS, MAX_STATES, MAX_SWEEP_POINTS, ROUTING_TOLERANCE } from './limits';
+import {
+  MAX_CAPACITY,
+  MAX_COST,
+  MAX_INTERVALS,
+  MAX_NODES,
+  MAX_RATE,
+  MAX_SCV,
+  MAX_SERVERS,
+  MAX_STATES,
+  MAX_SWEEP_POINTS,
+  MAX_TIME,
+  MIN_RATE,
+  ROUTING_TOLERANCE,
+} from './limits';
 
-const rate = z.number().positive('must be a positive rate');
+const rate = z
+  .number()
+  .min(MIN_RATE, `must be a positive rate (at least ${MIN_RATE})`)
+  .max(MAX_RATE, `must be at most ${MAX_RATE}`);
+/** A rate that may be 0 (no demand in an interval, no external arrivals at a node). */
+const rateOrZero = z.number().min(0, 'must not be negative').max(MAX_RATE, `must be at most ${MAX_RATE}`);
 const servers = z.number().int('must be a whole number').min(1, 'must be at least 1').max(MAX_SERVERS, `must be at most ${MAX_SERVERS}`);
-const duration = z.number().min(0, 'must not be negative');
-const scv = z.number().min(0, 'must not be negative');
+const duration = z.number().min(0, 'must not be negative').max(MAX_TIME, `must be at most ${MAX_TIME}`);
+const scv = z.number().min(0, 'must not be negative').max(MAX_SCV, `must be at most ${MAX_SCV}`);
+const cost = z.number().min(0, 'must not be negative').max(MAX_COST, `must be at most ${MAX_COST}`);
 const probability = z.number().gt(0, 'must be above 0').lt(1, 'must be below 1');
 const state = z.number().int('must be a whole number').min(0, 'must not be negative');
 
@@ -84,7 +103,7 @@ export const BirthDeathSpecSchema = z
 export const JacksonSpecSchema = z
   .object({
     model: z.literal('jackson'),
-    externalArrivalRates: z.array(z.number().min(0, 'must not be negative')).min(1).max(MAX_NODES),
+    externalArrivalRates: z.array(rateOrZero).min(1).max(MAX_NODES),
     routing: z.array(z.array(z.number().min(0, 'must not be negative').max(1, 'must be at most 1'))),
     serviceRates: z.array(rate),
     servers: z.array(servers),
@@ -149,18 +168,18 @@ export const CostOptimumSpecSchema = z.object({
   arrivalRate: rate,
   serviceRate: rate,
   /** Cost of one server per time unit. */
-  serverCost: z.number().min(0, 'must not be negative'),
+  serverCost: cost.positive('must be positive'),
   /** Cost of one customer waiting (Lq) or present (L) per time unit. */
-  waitingCost: z.number().min(0, 'must not be negative'),
+  waitingCost: cost,
   costBasis: z.enum(['Lq', 'L']).default('Lq'),
 });
 
 export const IntervalStaffingSpecSchema = z
   .object({
     model: z.literal('interval-staffing'),
-    arrivalRates: z.array(z.number().min(0, 'must not be negative')).min(1, 'needs at least one interval').max(MAX_INTERVALS),
+    arrivalRates: z.array(rateOrZero).min(1, 'needs at least one interval').max(MAX_INTERVALS),
     /** Length of one interval, in the time unit of the rates (optional; used for warnings). */
-    intervalLength: z.number().positive('must be positive').optional(),
+    intervalLength: duration.positive('must be positive').optional(),
     ...staffingFields,
   })
   .superRefine(refineStaffing);

@@ -24,16 +24,19 @@ export const ERLANG_A_METHOD: Method = {
   note: 'Exact stationary distribution (tail below 1e-17 dropped). Waiting times count every arrival, including those who abandon; P(Wq ≤ t) is exact by uniformisation.',
 };
 
-/** Number of states to keep: past the mode, and until the weight falls 1e-17 below it. */
+/**
+ * Number of states to keep: past the mode, and until the weight falls 1e-17 below the largest
+ * weight at or above c (so queue measures such as Lq keep their relative precision too).
+ */
 function truncation(lam: number, mu: number, c: number, theta: number): number {
   const cut = Math.log(1e17);
   let logW = 0;
-  let best = 0;
+  let bestQueued = -Infinity;
   for (let n = 1; n <= MAX_STATES; n++) {
     const r = lam / (Math.min(n, c) * mu + Math.max(n - c, 0) * theta);
     logW += Math.log(r);
-    if (logW > best) best = logW;
-    if (n > c && r < 1 && logW < best - cut) return n;
+    if (n >= c && logW > bestQueued) bestQueued = logW;
+    if (n > c && r < 1 && logW < bestQueued - cut) return n;
   }
   throw invalidInput('patienceRate', `is too small for this load: the queue would need more than ${MAX_STATES} states; use M/M/c if customers do not abandon`);
 }

@@ -7,7 +7,11 @@
  * their relative precision; the sum stops once the rest is below 1e-17 of it.
  * Reference: W. K. Grassmann (1977), "Transient solutions in Markovian queueing systems".
  */
-import { poissonPmfArray } from './poisson';
+import { invalidInput } from '../errors';
+import { logPoissonPmf, poissonPmfArray } from './poisson';
+
+/** Largest number of state-steps one tail evaluation may take (about a second of work). */
+export const MAX_UNIFORMISATION_WORK = 2e8;
 
 /** P(V > t) where start[i] = P(an arrival finds c + i present), i = 0…J. */
 export function virtualWaitTail(start: Float64Array, c: number, mu: number, theta: number, t: number): number {
@@ -16,9 +20,16 @@ export function virtualWaitTail(start: Float64Array, c: number, mu: number, thet
   let mass = 0;
   for (let i = 0; i <= J; i++) mass += start[i];
   if (t === 0) return mass;
+  // V is stochastically below an Erlang(J + 1, cμ) time: P(V > t) ≤ P(Poisson(cμt) ≤ J). When that
+  // bound is below 1e-300 the tail underflows anyway, and uniformising would take needless steps.
+  const y = c * mu * t;
+  if (y > J + 1 && logPoissonPmf(J, y) + Math.log(y / (y - J)) < -700) return 0;
   const lambda = c * mu + J * theta;
   const x = lambda * t;
   const kMax = Math.ceil(x + 12 * Math.sqrt(x) + 60);
+  if (kMax * (J + 1) > MAX_UNIFORMISATION_WORK) {
+    throw invalidInput('t', 'is too long for an exact waiting-time distribution at this load and patience rate');
+  }
   const pmf = poissonPmfArray(kMax, x);
   const stay = new Float64Array(J + 1);
   const move = new Float64Array(J + 1);

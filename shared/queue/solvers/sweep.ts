@@ -51,7 +51,6 @@ export function sweep(spec: SweepSpec, evaluate: (spec: unknown) => QueueResult)
   const rows: SweepRow[] = [];
   const errors: SweepPointError[] = [];
   const names = new Set<string>();
-  const wanted = spec.measures ? new Set(spec.measures) : null;
   let first: QueueResult | null = null;
   for (const x of xs) {
     const point = withParameter(spec.base, spec.parameter, x);
@@ -64,8 +63,10 @@ export function sweep(spec: SweepSpec, evaluate: (spec: unknown) => QueueResult)
       continue;
     }
     first ??= result;
-    for (const [measure, value] of Object.entries(scalarMeasures(result))) {
-      if (wanted && !wanted.has(measure)) continue;
+    const values = scalarMeasures(result);
+    for (const measure of spec.measures ?? Object.keys(values)) {
+      const value = values[measure];
+      if (value === undefined) continue;
       names.add(measure);
       rows.push({ x, measure, value });
     }
