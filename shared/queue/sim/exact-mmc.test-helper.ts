@@ -2,7 +2,7 @@
  * Textbook closed forms used only as test oracles (M/M/c by Erlang C, M/M/c/K by the birth–death
  * stationary distribution, M/M/c+M by its birth–death chain truncated far out). Source: the standard
  * birth–death derivations in any queueing text, e.g. Gross & Harris, Fundamentals of Queueing Theory
- * (from memory); computed with a running product, so moderate c only.
+ * (from memory); computed in log space.
  */
 export interface Exact {
   wq: number;
@@ -17,8 +17,11 @@ export interface Exact {
 
 /** Stationary distribution of the birth–death chain with up rate λ·[n < K] and down rate min(n,c)μ + θ·max(0,n−c). */
 export function birthDeath(lambda: number, mu: number, c: number, K: number, theta: number): Exact {
-  const p: number[] = [1];
-  for (let n = 1; n <= K; n++) p.push((p[n - 1] * lambda) / (Math.min(n, c) * mu + theta * Math.max(0, n - c)));
+  // Log weights, so heavily loaded chains do not overflow.
+  const logp: number[] = [0];
+  for (let n = 1; n <= K; n++) logp.push(logp[n - 1] + Math.log(lambda) - Math.log(Math.min(n, c) * mu + theta * Math.max(0, n - c)));
+  const top = Math.max(...logp);
+  const p = logp.map((x) => Math.exp(x - top));
   const z = p.reduce((a, b) => a + b, 0);
   const pi = p.map((x) => x / z);
   let l = 0, lq = 0, busy = 0, waitOnArrival = 0;

@@ -115,11 +115,8 @@ export function runSegment(p: SegmentPlan): number {
     if ((++events & mask32) === 0) p.tick(unit === 'time' ? Math.min(1, tLast / endTime) : Math.min(1, k / (w + H)));
     const tAb = patience !== null && patience.length > 0 ? (patience.peek() as Waiting).at : Infinity;
     // Ties: a departure first (it frees a server for a customer arriving at that instant), then an abandonment.
-    let t: number;
-    let kind: 0 | 1 | 2;
-    if (tDep <= tAb && tDep <= nextArrival) (t = tDep), (kind = 0);
-    else if (tAb <= nextArrival) (t = tAb), (kind = 1);
-    else (t = nextArrival), (kind = 2);
+    const kind = tDep <= tAb && tDep <= nextArrival ? 0 : tAb <= nextArrival ? 1 : 2;
+    const t = kind === 0 ? tDep : kind === 1 ? tAb : nextArrival;
     if (t === Infinity) break;
     while (t >= nextBoundary) {
       flush(nextBoundary);
@@ -154,6 +151,7 @@ export function runSegment(p: SegmentPlan): number {
         const o = (p.firstSample + s) * NF;
         const wait = t - qArr[e.qid & mask];
         stats[o + fAbandoned] += 1;
+        if (wait <= slT) stats[o + fWithinT] += 1; // P(Wq ≤ t) counts time in queue, however it ended
         stats[o + fSumWq] += wait;
         stats[o + fSumW] += wait;
       }

@@ -61,6 +61,13 @@ describe('simulate: finite room and abandonment', () => {
     for (const k of ['wq', 'lq', 'l', 'probWait', 'probAbandon'] as const) inside(r.estimates[k], ex[k]);
   });
 
+  it('M/M/1+M overloaded 100-fold keeps about 2000 waiting (the waiting line grows past its first buffer)', () => {
+    const ex = birthDeath(100, 1, 1, 6000, 0.05);
+    const r = simulate({ arrivalRate: 100, serviceRate: 1, servers: 1, patienceRate: 0.05, horizon: 30_000, warmup: 20_000, seed: 12 });
+    expect(r.estimates.lq.mean).toBeGreaterThan(1500);
+    for (const k of ['lq', 'probAbandon'] as const) inside(r.estimates[k], ex[k]);
+  });
+
   it('Little’s law holds inside the simulation: L ≈ λ·W for M/M/c/K (λ admitted)', () => {
     const r = simulate({ arrivalRate: 5, serviceRate: 1, servers: 4, capacity: 8, horizon: 20_000, seed: 2 });
     const admitted = 5 * (1 - r.estimates.probBlock.mean);

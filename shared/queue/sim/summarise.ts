@@ -13,7 +13,7 @@ export interface SimulationEstimates {
   l: Estimate;
   /** Fraction of admitted customers who had to queue. */
   probWait: Estimate;
-  /** Fraction of admitted customers whose service began within t (abandoning customers never do); only when t is given. */
+  /** P(Wq ≤ t): fraction of admitted customers whose time in queue was at most t (served or abandoned by then); only when t is given. */
   serviceLevel?: Estimate;
   /** Fraction of arriving customers turned away because the system held K (0 without capacity). */
   probBlock: Estimate;
