@@ -22,7 +22,7 @@ export function QueryErrorNotice({ error, what, onRetry }: QueryErrorNoticeProps
   if (isApiError(error) && error.status === 404) {
     return (
       <StatusMessage code="404" title={`No such ${what}`}>
-        It may have been removed, or the link may be mistyped.
+        It does not exist, or you are not one of its members. Check the link, or ask an administrator to add you.
       </StatusMessage>
     );
   }

@@ -9,8 +9,10 @@ interface TableProps {
 
 /** A quiet table: ruled rows, no zebra, numbers right-aligned by `Th`/`Td` with `num`. */
 export function Table({ caption, showCaption = false, children }: TableProps) {
+  // `relative` keeps visually hidden (absolute) header labels inside the scroll box; without
+  // it they widen the whole page on narrow screens.
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule bg-sheet">
+    <div className="relative overflow-x-auto rounded-lg border border-rule bg-sheet">
       <table className="w-full border-collapse text-sm">
         <caption className={showCaption ? 'px-4 py-3 text-left font-serif text-base' : 'sr-only'}>{caption}</caption>
         {children}

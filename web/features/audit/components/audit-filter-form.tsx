@@ -71,7 +71,7 @@ export function AuditFilterForm({ value, onApply }: { value: AuditFilters; onApp
         />
         <TextField label="From (day)" type="date" value={draft.from} onValueChange={set('from')} />
         <TextField label="To (day)" type="date" value={draft.to} onValueChange={set('to')} error={rangeBackwards ? 'Choose a day on or after the first one' : undefined} />
-        <TextField label="Text" type="search" value={draft.q} onValueChange={set('q')} maxLength={200} hint="Matches e-mail, subject and details" />
+        <TextField label="Containing" type="search" value={draft.q} onValueChange={set('q')} maxLength={200} placeholder="e-mail, subject or detail" />
       </div>
       <div className="mt-5 flex justify-end gap-2">
         <Button

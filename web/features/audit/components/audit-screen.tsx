@@ -54,8 +54,7 @@ export function AuditScreen() {
           <AuditTable entries={entries} />
           <div className="mt-6 flex items-center justify-between gap-4 text-sm text-ink-soft">
             <p role="status">
-              Showing {entries.length} {entries.length === 1 ? 'entry' : 'entries'}
-              {trail.hasNextPage ? '' : ', the oldest is last'}.
+              {trail.hasNextPage ? `The newest ${entries.length} entries.` : entries.length === 1 ? 'One entry.' : `All ${entries.length} entries.`}
             </p>
             {trail.hasNextPage && (
               <Button onClick={() => trail.fetchNextPage()} busy={trail.isFetchingNextPage}>

@@ -37,7 +37,7 @@ export function AuditTable({ entries }: { entries: AuditEntry[] }) {
               {e.subject && <span className="block">{e.subject}</span>}
               {e.detail && <span className="block text-xs break-words text-ink-faint">{describeDetail(e.detail)}</span>}
             </Td>
-            <Td className="whitespace-nowrap text-xs text-ink-faint">{e.ip ?? ''}</Td>
+            <Td className="whitespace-nowrap text-ink-faint tabular-nums">{e.ip ?? ''}</Td>
           </tr>
         ))}
       </tbody>

@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { useNavigate, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { z } from 'zod';
 import { invitationAcceptSchema } from '#shared/schemas/auth';
@@ -29,7 +29,14 @@ export function AcceptInvitationScreen() {
   if (invitation.isError) {
     const gone = isApiError(invitation.error) && (invitation.error.status === 404 || invitation.error.status === 410);
     return (
-      <AuthCard title={gone ? 'This invitation no longer works' : 'The invitation could not be opened'}>
+      <AuthCard
+        title={gone ? 'This invitation no longer works' : 'The invitation could not be opened'}
+        footer={
+          <Link to={paths.signIn} className="underline-offset-4 hover:underline">
+            Go to sign in
+          </Link>
+        }
+      >
         <p className="text-sm text-ink-soft">
           {gone
             ? 'It has expired or has already been used. Ask your administrator to send a new one, or sign in if you already set a password.'

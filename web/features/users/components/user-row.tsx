@@ -2,7 +2,6 @@ import { ROLES, ROLE_LABELS, type Role } from '#shared/schemas/roles';
 import type { User } from '#shared/schemas/users';
 import { Button } from '../../../components/ui/button';
 import { ConfirmButton } from '../../../components/ui/confirm-button';
-import { inputClass } from '../../../components/ui/field';
 import { Td } from '../../../components/ui/table';
 import { useToast } from '../../../components/ui/use-toast';
 import { formatDate } from '../../../lib/format-date';
@@ -39,7 +38,7 @@ export function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
         </label>
         <select
           id={`role-${user.id}`}
-          className={`${inputClass} w-auto py-1`}
+          className="rounded-md border border-rule-strong bg-sheet px-2 py-1 text-sm disabled:opacity-70"
           value={user.role}
           // Changing your own role could lock the practice out of administration.
           disabled={isSelf || update.isPending || user.status === 'deactivated'}
