@@ -2,7 +2,7 @@
  * `npm test`: a throwaway stack (own data folder, free ports), then typecheck, lint and every
  * vitest project (unit, integration, e2e), then tear-down. Exit code is non-zero on any failure.
  */
-import { spawn, spawnSync } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { existsSync, rmSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { bootStack } from './boot-stack';
@@ -14,7 +14,9 @@ import { waitForHttp } from './wait-http';
 const root = resolve(import.meta.dirname, '../..');
 const log = (s: string): void => console.log(`[test] ${s}`);
 const t0 = Date.now();
-const vitestArgs = process.argv.slice(2);
+// `--skip-checks` leaves out typecheck and lint (for quick local runs); the rest goes to vitest.
+const skipChecks = process.argv.includes('--skip-checks');
+const vitestArgs = process.argv.slice(2).filter((a) => a !== '--skip-checks');
 
 function ensureTestTools(): void {
   const missing = [
@@ -27,12 +29,14 @@ function ensureTestTools(): void {
   aptInstall(missing);
 }
 
-function step(name: string, cmd: string[], env: NodeJS.ProcessEnv = process.env): boolean {
+/** Runs one check as a child. Asynchronous on purpose: the fakes live in this process and must keep answering. */
+async function step(name: string, cmd: string[], env: NodeJS.ProcessEnv = process.env): Promise<boolean> {
   const s = Date.now();
   log(`${name}…`);
-  const r = spawnSync(process.execPath, cmd, { cwd: root, stdio: 'inherit', env });
-  log(`${name}: ${r.status === 0 ? 'passed' : 'FAILED'} (${((Date.now() - s) / 1000).toFixed(1)} s)`);
-  return r.status === 0;
+  const child = spawn(process.execPath, cmd, { cwd: root, stdio: 'inherit', env });
+  const code = await new Promise<number | null>((resolve) => child.on('exit', resolve));
+  log(`${name}: ${code === 0 ? 'passed' : 'FAILED'} (${((Date.now() - s) / 1000).toFixed(1)} s)`);
+  return code === 0;
 }
 
 const dataDir = join(root, '.test-data', `run-${process.pid}`);
@@ -49,8 +53,10 @@ process.on('SIGINT', () => void cleanup().then(() => process.exit(130)));
 try {
   ensureTestTools();
   const bin = (p: string): string => join(root, 'node_modules', p);
-  ok = step('typecheck', [bin('typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json']) && ok;
-  ok = step('lint', [bin('eslint/bin/eslint.js'), '.', '--max-warnings=0']) && ok;
+  if (!skipChecks) {
+    ok = (await step('typecheck', [bin('typescript/bin/tsc'), '--noEmit', '-p', 'tsconfig.json'])) && ok;
+    ok = (await step('lint', [bin('eslint/bin/eslint.js'), '.', '--max-warnings=0'])) && ok;
+  }
 
   const [dbPort, s3Port, smtpPort, mailFakePort, appPort] = await Promise.all([freePort(), freePort(), freePort(), freePort(), freePort()]);
   const demoPassword = 'sojourn-demo';
@@ -72,7 +78,7 @@ try {
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   await waitForHttp(`${appUrl}/api/health`);
-  ok = step('vitest', [bin('vitest/vitest.mjs'), 'run', ...vitestArgs], env) && ok;
+  ok = (await step('vitest', [bin('vitest/vitest.mjs'), 'run', ...vitestArgs], env)) && ok;
 } catch (err) {
   console.error(`[test] ${(err as Error).message}`);
   ok = false;
