@@ -44,7 +44,8 @@ describe('simulate: invalid input', () => {
     ['a single replication', { replications: 1 }, 'replications'],
     ['an unknown method', { method: 'bootstrap' }, 'method'],
     ['an unknown horizon unit', { horizonUnit: 'days' }, 'horizonUnit'],
-    ['an unknown field', { queueDiscipline: 'LIFO' }, ''],
+    ['an unknown field', { queueDiscipline: 'LIFO' }, 'queueDiscipline'],
+    ['an unknown field inside a distribution', { service: { kind: 'exponential', shape: 2 } }, 'service.shape'],
   ])('refuses %s with invalid_input at its path', (_what, patch, path) => {
     const { code, paths } = issuesOf({ ...base, ...patch });
     expect(code).toBe('invalid_input');
