@@ -16,7 +16,7 @@ export function StatusMessage({ code, title, children, ownsPage = true }: Status
   return (
     <section aria-labelledby="status-title" className="mx-auto max-w-xl py-16 text-center">
       {ownsPage && <title>{`${title} · Sojourn`}</title>}
-      {code && <p className="font-serif text-5xl text-rule-strong">{code}</p>}
+      {code && <p className="font-serif text-5xl text-ink-faint">{code}</p>}
       <h1 id="status-title" className="mt-3 text-2xl font-bold">
         {title}
       </h1>

@@ -1,4 +1,4 @@
-import { QueryCache, QueryClient } from '@tanstack/react-query';
+import { MutationCache, QueryCache, QueryClient } from '@tanstack/react-query';
 import { isApiError } from './api-error';
 
 /**
@@ -6,12 +6,12 @@ import { isApiError } from './api-error';
  * gone (401), so the shell can send the person to sign in and bring them back afterwards.
  */
 export function createQueryClient(onUnauthenticated?: () => void): QueryClient {
+  const onError = (err: unknown) => {
+    if (isApiError(err) && err.status === 401) onUnauthenticated?.();
+  };
   return new QueryClient({
-    queryCache: new QueryCache({
-      onError: (err) => {
-        if (isApiError(err) && err.status === 401) onUnauthenticated?.();
-      },
-    }),
+    queryCache: new QueryCache({ onError }),
+    mutationCache: new MutationCache({ onError }),
     defaultOptions: {
       queries: {
         staleTime: 30_000,
