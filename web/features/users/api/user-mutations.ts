@@ -26,7 +26,7 @@ export function useUpdateUser() {
   });
 }
 
-/** Sends the invitation again, or a reset-access e-mail to someone already active. */
+/** Sends the invitation again; for someone already active it is a fresh link to set a password. */
 export function useSendAccessEmail() {
   return useMutation({
     mutationFn: (id: number) => api(`/api/users/${id}/invitation`, { method: 'POST' }),

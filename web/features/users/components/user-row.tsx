@@ -20,7 +20,7 @@ export function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
 
   function sendAccess() {
     resend.mutate(user.id, {
-      onSuccess: () => toast.show(user.status === 'invited' ? `Invitation sent again to ${user.email}.` : `Access e-mail sent to ${user.email}.`, 'ok'),
+      onSuccess: () => toast.show(user.status === 'invited' ? `Invitation sent again to ${user.email}.` : `A new access link was sent to ${user.email}.`, 'ok'),
       onError: (err) => toast.show(err.message, 'danger'),
     });
   }
@@ -59,7 +59,7 @@ export function UserRow({ user, isSelf }: { user: User; isSelf: boolean }) {
         <span className="inline-flex flex-wrap justify-end gap-2">
           {user.status !== 'deactivated' && (
             <Button size="sm" variant="quiet" onClick={sendAccess} busy={resend.isPending}>
-              {user.status === 'invited' ? 'Re-send invitation' : 'Send reset e-mail'}
+              {user.status === 'invited' ? 'Re-send invitation' : 'Send access link'}
             </Button>
           )}
           {!isSelf &&
