@@ -7,6 +7,8 @@ export const paths = {
   invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
   engagements: '/engagements',
   engagement: (id: number | string) => `/engagements/${id}`,
+  study: (id: number | string) => `/studies/${id}`,
+  studyReader: (id: number | string) => `/studies/${id}/read`,
   adminUsers: '/admin/users',
   adminEngagements: '/admin/engagements',
   audit: '/admin/audit',

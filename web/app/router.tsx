@@ -19,6 +19,9 @@ const AdminEngagementsScreen = lazyScreen(() => import('../features/engagements/
 const AdminUsersScreen = lazyScreen(() => import('../features/users/components/admin-users-screen'), 'AdminUsersScreen');
 const AuditScreen = lazyScreen(() => import('../features/audit/components/audit-screen'), 'AuditScreen');
 const MailboxScreen = lazyScreen(() => import('../features/mailbox/components/mailbox-screen'), 'MailboxScreen');
+// The editor (TipTap) and the reader are their own chunks: only a study route loads them.
+const StudyEditorScreen = lazyScreen(() => import('../features/study-editor/components/study-editor-screen'), 'StudyEditorScreen');
+const StudyReaderScreen = lazyScreen(() => import('../features/study-reader/components/study-reader-screen'), 'StudyReaderScreen');
 
 export const router = createBrowserRouter([
   {
@@ -44,6 +47,8 @@ export const router = createBrowserRouter([
           { index: true, element: <Navigate to={paths.engagements} replace /> },
           { path: paths.engagements, element: <EngagementsScreen /> },
           { path: '/engagements/:id', element: <EngagementOverviewScreen /> },
+          { path: '/studies/:id', element: <StudyEditorScreen /> },
+          { path: '/studies/:id/read', element: <StudyReaderScreen /> },
           {
             element: <RequireRole roles={['admin']} />,
             children: [

@@ -1,0 +1,4 @@
+/** The study editor screen (route /studies/:id). Filled in by the editor work. */
+export function StudyEditorScreen() {
+  return <p>Study editor</p>;
+}

@@ -1,0 +1,4 @@
+/** The reading view of a study (route /studies/:id/read). */
+export function StudyReaderScreen() {
+  return <p>Study</p>;
+}
