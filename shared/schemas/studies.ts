@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { UNIT_CODES } from '../units/units';
+import { ASSUMPTION_NAME_MAX, ASSUMPTION_SOURCES } from './assumptions';
 import { studyBlockResultSchema } from './model-block';
 
 export const STUDY_TITLE_MAX = 200;
@@ -7,6 +9,17 @@ export const DOCUMENT_MAX_CHARS = 2_000_000;
 export const MAX_BLOCKS_PER_STUDY = 500;
 
 export const STUDY_STATUSES = ['draft', 'in_review', 'changes_requested', 'approved', 'released'] as const;
+export type StudyStatus = (typeof STUDY_STATUSES)[number];
+/**
+ * Statuses in which a study is still a draft in the broad sense: its document can be saved and
+ * assumption changes recompute its blocks. In review, approved and released studies are frozen.
+ */
+export const DRAFT_STUDY_STATUSES = ['draft', 'changes_requested'] as const satisfies readonly StudyStatus[];
+
+/** Client-generated ids of model blocks and sections; the server replaces missing or duplicate ones. */
+export const BLOCK_ID_PATTERN = /^[A-Za-z0-9_-]{6,40}$/;
+/** Most specs one POST /api/compute may carry. */
+export const COMPUTE_MAX_SPECS = 200;
 
 export const studySummarySchema = z.object({
   id: z.number().int(),
@@ -52,6 +65,29 @@ export const templateSummarySchema = z.object({
   assumptionCount: z.number().int(),
 });
 
+/**
+ * A study template as `templates/index.ts` exports it (STUDY_TEMPLATES). Model-block configs link
+ * template assumptions by key (`{ "assumption": "<key>" }`); creating a study rewrites them to ids.
+ */
+export const studyTemplateSchema = z.object({
+  key: z.string().min(1).max(80),
+  title: z.string().min(1),
+  description: z.string(),
+  assumptions: z.array(
+    z.object({
+      key: z.string().min(1),
+      name: z.string().min(1).max(ASSUMPTION_NAME_MAX),
+      value: z.number().finite(),
+      unit: z.enum(UNIT_CODES),
+      sourceKind: z.enum(ASSUMPTION_SOURCES),
+      sourceDetail: z.string().default(''),
+      notes: z.string().default(''),
+    }),
+  ),
+  document: documentSchema,
+});
+
+export type StudyTemplate = z.input<typeof studyTemplateSchema>;
 export type StudySummary = z.infer<typeof studySummarySchema>;
 export type StudyDetail = z.infer<typeof studyDetailSchema>;
 export type CreateStudy = z.infer<typeof createStudySchema>;
