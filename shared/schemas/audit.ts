@@ -17,6 +17,10 @@ export const AUDIT_ACTIONS = [
   'engagement_updated',
   'member_added',
   'member_removed',
+  'study_created',
+  'assumption_created',
+  'assumption_updated',
+  'assumption_deleted',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

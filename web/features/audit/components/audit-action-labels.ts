@@ -17,6 +17,10 @@ export const AUDIT_ACTION_LABELS: Record<AuditAction, string> = {
   engagement_updated: 'Engagement updated',
   member_added: 'Member added',
   member_removed: 'Member removed',
+  study_created: 'Study created',
+  assumption_created: 'Assumption added',
+  assumption_updated: 'Assumption changed',
+  assumption_deleted: 'Assumption deleted',
 };
 
 export function auditActionLabel(action: string): string {
