@@ -63,7 +63,7 @@ describe('an administrator bringing a new consultant onto an engagement', () => 
     await admin.getByLabel('Description').fill('Repair bays needed so that no more than one tram in twenty waits over a shift.');
     await admin.getByRole('button', { name: 'Create engagement' }).click();
     await admin.getByRole('heading', { name: engagementName, level: 1 }).waitFor();
-    await admin.getByLabel('Person').selectOption({ label: 'Hollis Varga · Consultant' });
+    await admin.getByLabel('Person').selectOption({ label: `Hollis Varga (${email}) · Consultant` });
     await admin.getByRole('button', { name: 'Add to engagement' }).click();
     await admin.getByRole('cell', { name: email, exact: true }).waitFor();
     await screenshot(admin, 'journey-engagement-with-member');

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { sessionQueryOptions } from '../features/auth/api/session-query';
+import { SessionUserContext } from '../features/auth/api/session-user-context';
 import { Banner } from '../components/ui/banner';
 import { Button } from '../components/ui/button';
 import { Loading } from '../components/ui/loading';
@@ -31,5 +32,5 @@ export function RequireSession({ children }: { children: ReactNode }) {
     const to = here === '/' || here === paths.engagements ? paths.signIn : `${paths.signIn}?next=${encodeURIComponent(here)}`;
     return <Navigate to={to} replace />;
   }
-  return children;
+  return <SessionUserContext value={session.data}>{children}</SessionUserContext>;
 }

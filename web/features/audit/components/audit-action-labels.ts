@@ -1,7 +1,11 @@
 import type { AuditAction } from '#shared/schemas/audit';
 
-/** Plain words for each recorded event. */
-export const AUDIT_ACTION_LABELS: Record<AuditAction, string> = {
+/**
+ * Plain words for recorded events. Partial on purpose: other features add actions to the
+ * shared list, and an action without a label here still reads sensibly (see below) instead of
+ * breaking the build.
+ */
+export const AUDIT_ACTION_LABELS: Partial<Record<AuditAction, string>> = {
   sign_in: 'Signed in',
   sign_in_failed: 'Sign-in refused',
   sign_out: 'Signed out',
@@ -20,9 +24,13 @@ export const AUDIT_ACTION_LABELS: Record<AuditAction, string> = {
   study_created: 'Study created',
   assumption_created: 'Assumption added',
   assumption_updated: 'Assumption changed',
-  assumption_deleted: 'Assumption deleted',
+  assumption_deleted: 'Assumption removed',
 };
 
+/** "study_released" → "Study released" when no label is set. */
 export function auditActionLabel(action: string): string {
-  return (AUDIT_ACTION_LABELS as Record<string, string>)[action] ?? action.replaceAll('_', ' ');
+  const label = (AUDIT_ACTION_LABELS as Record<string, string | undefined>)[action];
+  if (label) return label;
+  const words = action.replaceAll('_', ' ');
+  return words.charAt(0).toUpperCase() + words.slice(1);
 }

@@ -7,9 +7,9 @@ import { TextField } from '../../../components/ui/text-field';
 import { engagementListQuery } from '../../engagements/api/engagement-queries';
 import { userListQuery } from '../../users/api/user-queries';
 import type { AuditFilters } from '../api/audit-filters';
-import { AUDIT_ACTION_LABELS } from './audit-action-labels';
+import { auditActionLabel } from './audit-action-labels';
 
-const actionOptions = AUDIT_ACTIONS.map((a) => ({ value: a, label: AUDIT_ACTION_LABELS[a] }));
+const actionOptions = AUDIT_ACTIONS.map((a) => ({ value: a, label: auditActionLabel(a) }));
 
 interface Draft {
   action: string;

@@ -30,8 +30,10 @@ export function useSignOut() {
   return useMutation({
     mutationFn: () => api('/api/auth/sign-out', { method: 'POST' }),
     onSettled: () => {
-      qc.clear();
+      // Forget the person first so RequireSession unmounts the screens, then drop their data;
+      // the other order lets still-mounted screens refetch (and get 401s) in between.
       qc.setQueryData(authKeys.session(), null);
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.all[0] });
     },
   });
 }
@@ -54,7 +56,7 @@ export function useAcceptInvitation(token: string) {
     mutationFn: (body: InvitationAccept) =>
       api(`/api/invitations/${encodeURIComponent(token)}/accept`, { method: 'POST', body, schema: userBody }),
     onSuccess: ({ user }) => {
-      qc.clear();
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.all[0] });
       qc.setQueryData(authKeys.session(), user);
     },
   });

@@ -1,10 +1,10 @@
-import { useQuery } from '@tanstack/react-query';
+import { useContext } from 'react';
 import type { SessionUser } from '#shared/schemas/auth';
-import { sessionQueryOptions } from './session-query';
+import { SessionUserContext } from './session-user-context';
 
 /** The signed-in person, for screens under RequireSession (which guarantees there is one). */
 export function useCurrentUser(): SessionUser {
-  const { data } = useQuery(sessionQueryOptions());
-  if (!data) throw new Error('useCurrentUser used outside a signed-in area');
-  return data;
+  const user = useContext(SessionUserContext);
+  if (!user) throw new Error('useCurrentUser used outside RequireSession');
+  return user;
 }

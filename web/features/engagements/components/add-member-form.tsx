@@ -23,7 +23,7 @@ export function AddMemberForm({ engagementId, memberIds }: { engagementId: numbe
   const candidates = (users.data ?? [])
     .filter((u) => u.status !== 'deactivated' && !memberIds.includes(u.id))
     .sort((a, b) => a.name.localeCompare(b.name))
-    .map((u) => ({ value: String(u.id), label: `${u.name} · ${ROLE_LABELS[u.role]}${u.status === 'invited' ? ' (invited)' : ''}` }));
+    .map((u) => ({ value: String(u.id), label: `${u.name} (${u.email}) · ${ROLE_LABELS[u.role]}${u.status === 'invited' ? ', invited' : ''}` }));
 
   function submit(e: FormEvent) {
     e.preventDefault();
