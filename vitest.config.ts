@@ -8,7 +8,7 @@ export default defineConfig({
       {
         test: {
           name: 'unit',
-          include: ['shared/**/*.test.ts', 'web/**/*.test.{ts,tsx}', 'api/**/*.unit.test.ts', 'fakes/**/*.test.ts'],
+          include: ['shared/**/*.test.ts', 'web/**/*.test.{ts,tsx}', 'api/**/*.unit.test.ts', 'fakes/**/*.test.ts', 'templates/**/*.test.ts'],
           environment: 'node',
         },
       },
