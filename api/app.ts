@@ -8,12 +8,15 @@ import type { AppContext } from './context';
 import { HttpError } from './http-error';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler } from './middleware/error-handler';
+import { assumptionsRouter } from './routes/assumptions/assumptions.router';
 import { auditRouter } from './routes/audit/audit.router';
 import { authRouter } from './routes/auth/auth.router';
+import { computeRouter } from './routes/compute/compute.router';
 import { engagementsRouter } from './routes/engagements/engagements.router';
 import { healthRouter } from './routes/health/health.router';
 import { invitationsRouter } from './routes/invitations/invitations.router';
 import { mailboxRouter } from './routes/mailbox/mailbox.router';
+import { studiesRouter } from './routes/studies/studies.router';
 import { usersRouter } from './routes/users/users.router';
 
 export const SESSION_COOKIE = 'sojourn.sid';
@@ -44,6 +47,9 @@ export function createApp(ctx: AppContext): Express {
   );
 
   const api = express.Router();
+  // A study document may hold DOCUMENT_MAX_CHARS (2M characters, more bytes in UTF-8): its save
+  // gets a larger body limit; every other route keeps 2 MB. The first parser to read a body wins.
+  api.put('/studies/:id/document', express.json({ limit: '8mb' }));
   api.use(express.json({ limit: '2mb' }));
   api.use(
     session({
@@ -70,6 +76,9 @@ export function createApp(ctx: AppContext): Express {
   api.use(invitationsRouter(ctx));
   api.use(usersRouter(ctx));
   api.use(engagementsRouter(ctx));
+  api.use(studiesRouter(ctx));
+  api.use(assumptionsRouter(ctx));
+  api.use(computeRouter(ctx));
   api.use(auditRouter(ctx));
   api.use(mailboxRouter(ctx));
   api.use((req) => {

@@ -1,0 +1,126 @@
+import { and, eq, sql } from 'drizzle-orm';
+import type { Assumption, CreateAssumption, MovedNumber, UpdateAssumption } from '../../../shared/schemas/assumptions';
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { AppContext } from '../../context';
+import { assumptions, memberships, users } from '../../db/schema/index';
+import { HttpError, notFound } from '../../http-error';
+import { recordAudit } from '../audit/audit.service';
+import type { EngagementRow } from '../engagements/engagement-access';
+import { blocksUsing, usageCounts } from './assumption-usage';
+import { propagateChange } from './propagate-change';
+
+export type AssumptionRow = typeof assumptions.$inferSelect;
+
+const query = (ctx: AppContext) =>
+  ctx.db.select({ a: assumptions, ownerName: users.name }).from(assumptions).leftJoin(users, eq(users.id, assumptions.ownerId));
+
+const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: number): Assumption => ({
+  id: a.id,
+  engagementId: a.engagementId,
+  name: a.name,
+  value: a.value,
+  unit: a.unit,
+  sourceKind: a.sourceKind,
+  sourceDetail: a.sourceDetail,
+  ownerId: a.ownerId,
+  ownerName,
+  notes: a.notes,
+  usageCount,
+  updatedAt: a.updatedAt.toISOString(),
+  version: a.version,
+});
+
+export async function listAssumptions(ctx: AppContext, engagementId: number): Promise<Assumption[]> {
+  const [rows, counts] = await Promise.all([query(ctx).where(eq(assumptions.engagementId, engagementId)).orderBy(assumptions.name), usageCounts(ctx.db, engagementId)]);
+  return rows.map((r) => toAssumption(r.a, r.ownerName, counts.get(r.a.id) ?? 0));
+}
+
+async function describe(ctx: AppContext, id: number): Promise<Assumption> {
+  const [r] = await query(ctx).where(eq(assumptions.id, id));
+  if (!r) throw notFound('That assumption');
+  return toAssumption(r.a, r.ownerName, (await usageCounts(ctx.db, r.a.engagementId)).get(id) ?? 0);
+}
+
+/** An owner must be a member of the engagement (the register names people the client knows). */
+async function assertOwner(ctx: AppContext, engagementId: number, ownerId: number | null | undefined): Promise<void> {
+  if (ownerId === null || ownerId === undefined) return;
+  const [m] = await ctx.db.select().from(memberships).where(and(eq(memberships.engagementId, engagementId), eq(memberships.userId, ownerId)));
+  if (!m) throw new HttpError(400, 'validation_failed', 'The owner must be a member of this engagement.', [{ path: 'ownerId', message: 'Not a member of this engagement' }]);
+}
+
+const duplicateName = (name: string): HttpError =>
+  new HttpError(409, 'conflict', `This engagement already has an assumption named "${name}".`, [{ path: 'name', message: 'An assumption with this name exists' }]);
+const isDuplicate = (err: unknown): boolean => (err as { cause?: { code?: string }; code?: string }).cause?.code === 'ER_DUP_ENTRY' || (err as { code?: string }).code === 'ER_DUP_ENTRY';
+
+export async function createAssumption(ctx: AppContext, engagement: EngagementRow, input: CreateAssumption, by: SessionUser, ip?: string): Promise<Assumption> {
+  await assertOwner(ctx, engagement.id, input.ownerId);
+  const now = new Date();
+  let id: number;
+  try {
+    [{ insertId: id }] = await ctx.db.insert(assumptions).values({ ...input, engagementId: engagement.id, createdAt: now, updatedAt: now });
+  } catch (err) {
+    if (isDuplicate(err)) throw duplicateName(input.name);
+    throw err;
+  }
+  await recordAudit(ctx.db, { action: 'assumption_created', actor: by, engagementId: engagement.id, subject: input.name, detail: { assumptionId: id, value: input.value, unit: input.unit }, ip });
+  return describe(ctx, id);
+}
+
+/**
+ * Optimistic edit (409 with the current version when stale). A new value or unit recomputes every
+ * block linking it in the engagement's draft studies, in the same transaction, and the answer
+ * lists each number that moved.
+ */
+export async function updateAssumption(ctx: AppContext, row: AssumptionRow, patch: UpdateAssumption, by: SessionUser, ip?: string): Promise<{ assumption: Assumption; moved: MovedNumber[] }> {
+  const { version, ...fields } = patch;
+  await assertOwner(ctx, row.engagementId, fields.ownerId);
+  let moved: MovedNumber[] = [];
+  try {
+    moved = await ctx.db.transaction(async (tx) => {
+      const [res] = await tx
+        .update(assumptions)
+        .set({ ...fields, updatedAt: new Date(), version: sql`${assumptions.version} + 1` })
+        .where(and(eq(assumptions.id, row.id), eq(assumptions.version, version)));
+      if (res.affectedRows !== 1) {
+        const [now] = await tx.select({ version: assumptions.version }).from(assumptions).where(eq(assumptions.id, row.id));
+        throw new HttpError(409, 'conflict', 'Someone changed this assumption meanwhile. Reload to see their change.', [
+          { path: 'version', message: `The assumption is now at version ${now?.version ?? version}` },
+        ]);
+      }
+      const numbersChange = (fields.value !== undefined && fields.value !== row.value) || (fields.unit !== undefined && fields.unit !== row.unit);
+      return numbersChange ? propagateChange(tx, row.engagementId, row.id) : [];
+    });
+  } catch (err) {
+    if (isDuplicate(err)) throw duplicateName(fields.name ?? row.name);
+    throw err;
+  }
+  const before = { value: row.value, unit: row.unit, name: row.name };
+  await recordAudit(ctx.db, {
+    action: 'assumption_updated',
+    actor: by,
+    engagementId: row.engagementId,
+    subject: fields.name ?? row.name,
+    detail: { assumptionId: row.id, before, changes: fields, movedNumbers: moved.length },
+    ip,
+  });
+  return { assumption: await describe(ctx, row.id), moved };
+}
+
+/** Refused with 409 while any block links it; the issues name each block ("study — block"). */
+export async function deleteAssumption(ctx: AppContext, row: AssumptionRow, by: SessionUser, ip?: string): Promise<void> {
+  const uses = await blocksUsing(ctx.db, row.id);
+  if (uses.length > 0) {
+    const names = uses.map((u) => `${u.studyTitle} — ${u.blockTitle}`);
+    throw new HttpError(409, 'conflict', `"${row.name}" is used by ${uses.length} model block${uses.length === 1 ? '' : 's'}: ${names.join('; ')}. Unlink it first.`, [
+      ...uses.map((u, i) => ({ path: `usedBy.${i}`, message: names[i] })),
+    ]);
+  }
+  try {
+    await ctx.db.delete(assumptions).where(eq(assumptions.id, row.id));
+  } catch (err) {
+    // A save linked it between the check and the delete: the foreign key refuses.
+    if ((err as { cause?: { code?: string } }).cause?.code === 'ER_ROW_IS_REFERENCED_2') throw new HttpError(409, 'conflict', `"${row.name}" has just been linked by a model block.`);
+    throw err;
+  }
+  await recordAudit(ctx.db, { action: 'assumption_deleted', actor: by, engagementId: row.engagementId, subject: row.name, detail: { assumptionId: row.id, value: row.value, unit: row.unit }, ip });
+}

@@ -1,0 +1,69 @@
+import { eq } from 'drizzle-orm';
+import type { BlockConfig, StudyBlockResult } from '../../../shared/schemas/model-block';
+import type { Db } from '../../db/client';
+import { studyBlockAssumptions, studyBlocks } from '../../db/schema/index';
+
+export type StudyBlockRow = typeof studyBlocks.$inferSelect;
+/** A transaction or the pool: both run the same queries. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0] | Db;
+
+export interface ComputedBlock {
+  position: number;
+  config: BlockConfig;
+  result: StudyBlockResult;
+}
+
+/** Chunked so a study with hundreds of charted blocks stays far below max_allowed_packet. */
+const CHUNK = 50;
+
+export function toBlockRow(studyId: number, b: ComputedBlock): typeof studyBlocks.$inferInsert {
+  const r = b.result;
+  return {
+    studyId,
+    blockId: r.blockId,
+    position: b.position,
+    title: b.config.title,
+    config: b.config as unknown as Record<string, unknown>,
+    resolvedSpec: r.resolvedSpec,
+    result: r.result,
+    error: r.error,
+    scenarios: r.scenarios,
+    chart: r.chart,
+    engineVersion: r.engineVersion,
+    computedAt: new Date(r.computedAt),
+  };
+}
+
+export function fromBlockRow(row: StudyBlockRow, assumptionIds: number[]): StudyBlockResult {
+  return {
+    blockId: row.blockId,
+    status: row.error ? 'error' : 'ok',
+    resolvedSpec: row.resolvedSpec ?? null,
+    result: row.result ?? null,
+    error: (row.error as StudyBlockResult['error']) ?? null,
+    scenarios: row.scenarios as StudyBlockResult['scenarios'],
+    chart: (row.chart as StudyBlockResult['chart']) ?? null,
+    assumptionIds,
+    engineVersion: row.engineVersion,
+    computedAt: row.computedAt.toISOString(),
+  };
+}
+
+/** Replaces every block of a study and its assumption links (links cascade with the blocks). */
+export async function replaceStudyBlocks(tx: Tx, studyId: number, blocks: ComputedBlock[]): Promise<void> {
+  await tx.delete(studyBlocks).where(eq(studyBlocks.studyId, studyId));
+  for (let i = 0; i < blocks.length; i += CHUNK) {
+    await tx.insert(studyBlocks).values(blocks.slice(i, i + CHUNK).map((b) => toBlockRow(studyId, b)));
+  }
+  const links = blocks.flatMap((b) => b.result.assumptionIds.map((assumptionId) => ({ studyId, blockId: b.result.blockId, assumptionId })));
+  for (let i = 0; i < links.length; i += CHUNK * 4) await tx.insert(studyBlockAssumptions).values(links.slice(i, i + CHUNK * 4));
+}
+
+/** Every block of a study with its links, keyed by blockId, in document order. */
+export async function readStudyBlocks(db: Tx, studyId: number): Promise<Map<string, { row: StudyBlockRow; result: StudyBlockResult }>> {
+  const rows = await db.select().from(studyBlocks).where(eq(studyBlocks.studyId, studyId)).orderBy(studyBlocks.position);
+  const links = await db.select().from(studyBlockAssumptions).where(eq(studyBlockAssumptions.studyId, studyId));
+  const byBlock = new Map<string, number[]>();
+  for (const l of links) byBlock.set(l.blockId, [...(byBlock.get(l.blockId) ?? []), l.assumptionId]);
+  return new Map(rows.map((row) => [row.blockId, { row, result: fromBlockRow(row, (byBlock.get(row.blockId) ?? []).sort((a, b) => a - b)) }]));
+}
