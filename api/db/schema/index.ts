@@ -4,3 +4,4 @@ export * from './audit';
 export * from './sessions';
 export * from './assumptions';
 export * from './studies';
+export * from './mail-outbox';
