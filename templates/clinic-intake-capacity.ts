@@ -32,7 +32,7 @@ const ASSUMPTIONS: TemplateAssumption[] = [
     unit: 'minutes',
     sourceKind: 'dataset',
     sourceDetail: 'Registration system: time from opening to closing a record, twelve sample sessions.',
-    notes: '',
+    notes: 'First visits take longer than returning ones; if the mix changes, refit.',
   },
   {
     key: 'intake_desks',
@@ -196,7 +196,7 @@ const document = doc(
   heading(1, 'Screening staff for a mean-wait target', 'ci-staffing'),
   para(
     i('Guidance: '),
-    'the fewest screening staff for a mean wait of at most 10 minutes (the target is typed in the block, in minutes; agree it with the client). The answer is a floor from the model, not a rota: regulated minimum staffing, competence mix, breaks and cover come first.',
+    'the fewest screening staff for a mean wait of at most 10 minutes (a placeholder typed in the block, in minutes; agree the target with the client and its clinical lead). The answer is a floor from the model, not a rota: regulated minimum staffing, competence mix, breaks and cover come first.',
   ),
   block('ci-staffing-wait', {
     title: 'Fewest screening staff for a mean wait of at most 10 minutes',

@@ -167,7 +167,7 @@ const document = doc(
     chart: { parameter: 'servers', from: 28, to: 38, steps: 11, measures: ['serviceLevel', 'Wq'] },
     shownMeasures: ['offeredLoad', 'rho', 'probWait', 'serviceLevel', 'Wq', 'wqPercentile', 'Lq'],
   }),
-  para('The square-root staffing rule (agents ≈ load + β·√load) is shown by the staffing block as β for comparison only; the exact Erlang C answer above is the one to quote.'),
+  para('The square-root staffing rule (agents ≈ load + β·√load, common practice as a quick check) is shown by the staffing block as β for comparison only; the exact Erlang C answer above is the one to quote.'),
 
   heading(1, 'Callers who hang up', 'sd-abandonment'),
   para(

@@ -1,5 +1,6 @@
 import { getSchema, type JSONContent } from '@tiptap/core';
 import { describe, expect, it } from 'vitest';
+import { sanitiseDocument } from '../api/routes/studies/document-sanitiser';
 import { studyExtensions } from '../shared/editor/study-extensions';
 import { compute, MODEL_CATALOG, type QueueResult, type StaffingResult, type SweepResult } from '../shared/queue/index';
 import { scalarMeasures } from '../shared/queue/solvers/sweep';
@@ -160,9 +161,21 @@ describe.each(STUDY_TEMPLATES.map((t) => [t.key, t] as const))('template %s', (_
         }
       }
     }
+    // The server's save path keeps every id, block and section as written.
+    const clean = sanitiseDocument(relinked);
+    expect(clean.blocks.map((x) => x.blockId)).toEqual(blocks.map((x) => x.blockId));
+    expect(templateSections(clean.document as JSONContent)).toEqual(sections);
+    expect(textOf(clean.document as JSONContent)).toEqual(textOf(t.document));
     // The template itself is untouched.
     expect(JSON.stringify(t.document)).not.toContain('"assumption":100');
     expect(() => templateSummarySchema.parse(summarizeTemplate(t))).not.toThrow();
+  });
+});
+
+describe('assumption names across templates', () => {
+  it('are distinct, so one engagement can hold studies from several templates', () => {
+    const names = STUDY_TEMPLATES.flatMap((t) => t.assumptions.map((a) => a.name));
+    expect(new Set(names).size).toBe(names.length);
   });
 });
 

@@ -77,7 +77,7 @@ const ASSUMPTIONS: TemplateAssumption[] = [
     unit: 'percent',
     sourceKind: 'client',
     sourceDetail: "The client's latency objective is stated at the 99th percentile.",
-    notes: '',
+    notes: 'Percentiles far in the tail rest on the exponential assumption; compare with measured latency percentiles.',
   },
   {
     key: 'queue_delay_budget',
@@ -86,7 +86,7 @@ const ASSUMPTIONS: TemplateAssumption[] = [
     unit: 'seconds',
     sourceKind: 'client',
     sourceDetail: 'Share of the end-to-end latency objective left for waiting for a worker slot.',
-    notes: '',
+    notes: 'The peak block reports the share of requests that wait no longer than this.',
   },
   {
     key: 'connection_limit',
@@ -104,7 +104,7 @@ const ASSUMPTIONS: TemplateAssumption[] = [
     unit: 'per_second',
     sourceKind: 'dataset',
     sourceDetail: 'Writer metrics in the busiest minutes of the sample weeks.',
-    notes: '',
+    notes: 'One write per request that changes data; check the ratio if the traffic mix shifts.',
   },
   {
     key: 'writer_service_time',
@@ -113,7 +113,7 @@ const ASSUMPTIONS: TemplateAssumption[] = [
     unit: 'seconds',
     sourceKind: 'dataset',
     sourceDetail: 'Writer metrics: busy time per write.',
-    notes: '',
+    notes: 'Four milliseconds, entered in seconds.',
   },
   {
     key: 'writer_scv',
@@ -122,7 +122,7 @@ const ASSUMPTIONS: TemplateAssumption[] = [
     unit: 'number',
     sourceKind: 'dataset',
     sourceDetail: 'Variance over mean squared of write times.',
-    notes: '',
+    notes: 'Above 1: occasional slow writes (index maintenance, disk flushes).',
   },
 ];
 
