@@ -3,6 +3,7 @@ import MySQLStoreFactory from 'express-mysql-session';
 import type { Config } from './config';
 import { createDb } from './db/client';
 import { createMailer } from './mail/mailer';
+import { createOutbox } from './mail/outbox';
 import { createObjectStorage } from './storage/object-storage';
 
 /** Everything a request handler needs, built once per process and closed on shutdown. */
@@ -24,6 +25,7 @@ export function createContext(config: Config) {
   });
   const storage = createObjectStorage(config.s3);
   const mailer = createMailer(config.smtpUrl, config.mailFrom);
+  const outbox = createOutbox(db, mailer);
   return {
     config,
     db,
@@ -31,7 +33,9 @@ export function createContext(config: Config) {
     sessionStore,
     storage,
     mailer,
+    outbox,
     async close(): Promise<void> {
+      await outbox.stop();
       await sessionStore.close();
       await pool.end();
       mailer.close();

@@ -15,6 +15,7 @@ try {
 }
 const ctx = createContext(config);
 const app = createApp(ctx);
+ctx.outbox.start();
 const host = process.env.HOST ?? '127.0.0.1';
 const server = app.listen(config.port, host);
 server.on('listening', () => console.log(`[api] listening on http://${host}:${config.port}`));

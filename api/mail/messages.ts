@@ -32,3 +32,20 @@ export function passwordResetMail(to: string, link: string): OutgoingMail {
     ].join('\n'),
   };
 }
+
+/** For a person who already has an account: the administrator sent a fresh way in. */
+export function accessLinkMail(to: string, name: string, link: string, sentBy: string): OutgoingMail {
+  return {
+    to,
+    subject: 'A new access link for Sojourn',
+    text: [
+      `Hello ${name},`,
+      '',
+      `${sentBy} sent you a new link to set your Sojourn password (valid for 7 days, usable once):`,
+      '',
+      link,
+      '',
+      'Your current password keeps working until you use the link.',
+    ].join('\n'),
+  };
+}

@@ -61,7 +61,7 @@ export function authRouter(ctx: AppContext, p: passport.PassportStatic): Router 
     // Same answer whether or not the account exists, so addresses cannot be probed.
     if (user && user.status === 'active') {
       const token = await issueToken(ctx.db, user.id, 'password_reset');
-      await ctx.mailer.send(passwordResetMail(user.email, `${ctx.config.publicUrl}/reset-password/${token}`));
+      await ctx.outbox.enqueue(passwordResetMail(user.email, `${ctx.config.publicUrl}/reset-password/${token}`));
       await recordAudit(ctx.db, { action: 'password_reset_requested', actor: user, ip: req.ip });
     }
     res.status(202).json({ ok: true });

@@ -4,7 +4,7 @@ import type { InviteUser, UpdateUser, User } from '../../../shared/schemas/users
 import type { AppContext } from '../../context';
 import { users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http-error';
-import { invitationMail } from '../../mail/messages';
+import { accessLinkMail, invitationMail } from '../../mail/messages';
 import { recordAudit } from '../audit/audit.service';
 import { issueToken } from '../auth/tokens.service';
 import { findUserByEmail, findUserById, toUser } from './user-records';
@@ -20,7 +20,8 @@ export async function sendInvitation(ctx: AppContext, userId: number, by: Sessio
   if (!user) throw notFound('That person');
   if (user.status === 'deactivated') throw new HttpError(409, 'conflict', 'Reactivate this person before sending an invitation.');
   const token = await issueToken(ctx.db, user.id, 'invitation');
-  await ctx.mailer.send(invitationMail(user.email, user.name, `${ctx.config.publicUrl}/invitations/${token}`, by.name));
+  const link = `${ctx.config.publicUrl}/invitations/${token}`;
+  await ctx.outbox.enqueue(user.status === 'active' ? accessLinkMail(user.email, user.name, link, by.name) : invitationMail(user.email, user.name, link, by.name));
   await recordAudit(ctx.db, { action: 'user_invited', actor: by, subject: user.email, detail: { role: user.role }, ip });
 }
 
