@@ -1,3 +1,4 @@
+import { useEffect, useRef } from 'react';
 import { EditorContent, useEditor, type JSONContent } from '@tiptap/react';
 import { studyExtensions } from '#shared/editor/study-extensions';
 import { EditorToolbar } from './editor-toolbar';
@@ -20,6 +21,11 @@ interface StudyEditorProps {
  * against, with the model block's React view and the id keeper added.
  */
 export function StudyEditor({ initialContent, editable, onChange, onBlur }: StudyEditorProps) {
+  // The editor keeps the callbacks it was created with; refs let it always call the latest ones.
+  const handlers = useRef({ onChange, onBlur });
+  useEffect(() => {
+    handlers.current = { onChange, onBlur };
+  }, [onChange, onBlur]);
   const editor = useEditor({
     extensions: [...studyExtensions({ modelBlock: ModelBlockWithView }), StudyIds],
     content: initialContent,
@@ -28,8 +34,8 @@ export function StudyEditor({ initialContent, editable, onChange, onBlur }: Stud
     editorProps: {
       attributes: { class: 'study-text', 'aria-label': 'Study text', 'aria-multiline': 'true', role: 'textbox' },
     },
-    onUpdate: ({ editor: e }) => onChange(e.getJSON()),
-    onBlur: () => onBlur(),
+    onUpdate: ({ editor: e }) => handlers.current.onChange(e.getJSON()),
+    onBlur: () => handlers.current.onBlur(),
   });
 
   return (

@@ -39,6 +39,8 @@ export function useAutosave(study: StudyDetail) {
   const [confirmedConfigs, setConfirmedConfigs] = useState(() => blockConfigs(study.document));
   const [saveIssues, setSaveIssues] = useState<Record<string, ApiIssue[]>>({});
 
+  // The save schedules its own follow-up; it reaches itself through this ref.
+  const saveRef = useRef<() => Promise<void>>(async () => {});
   const set = useCallback((s: SaveStatus) => {
     statusRef.current = s;
     setStatus(s);
@@ -62,7 +64,7 @@ export function useAutosave(study: StudyDetail) {
       setSavedAt(new Date());
       qc.setQueryData(studyKeys.detail(study.id), { ...next, document: sent });
       set(dirty.current ? 'pending' : 'saved');
-      if (dirty.current) timer.current = window.setTimeout(() => void save(), AUTOSAVE_DELAY_MS);
+      if (dirty.current) timer.current = window.setTimeout(() => void saveRef.current(), AUTOSAVE_DELAY_MS);
     } catch (err) {
       dirty.current = true;
       if (!isApiError(err) || err.status === 0) {
@@ -80,6 +82,9 @@ export function useAutosave(study: StudyDetail) {
       inFlight.current = false;
     }
   }, [qc, set, study.id]);
+  useEffect(() => {
+    saveRef.current = save;
+  }, [save]);
 
   const schedule = useCallback(() => {
     dirty.current = true;
@@ -108,14 +113,16 @@ export function useAutosave(study: StudyDetail) {
       e.preventDefault(); // asks the browser to confirm leaving with unsaved text
     };
     const retry = window.setInterval(() => statusRef.current === 'offline' && void save(), OFFLINE_RETRY_MS);
+    const offline = () => statusRef.current === 'pending' && set('offline');
     window.addEventListener('online', online);
-    window.addEventListener('offline', () => statusRef.current === 'pending' && set('offline'));
+    window.addEventListener('offline', offline);
     document.addEventListener('visibilitychange', hidden);
     window.addEventListener('beforeunload', leaving);
     return () => {
       window.clearInterval(retry);
       window.clearTimeout(timer.current);
       window.removeEventListener('online', online);
+      window.removeEventListener('offline', offline);
       document.removeEventListener('visibilitychange', hidden);
       window.removeEventListener('beforeunload', leaving);
     };
