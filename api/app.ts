@@ -17,6 +17,7 @@ import { healthRouter } from './routes/health/health.router';
 import { invitationsRouter } from './routes/invitations/invitations.router';
 import { mailboxRouter } from './routes/mailbox/mailbox.router';
 import { studiesRouter } from './routes/studies/studies.router';
+import { simulationsRouter } from './routes/simulations/simulations.router';
 import { usersRouter } from './routes/users/users.router';
 
 export const SESSION_COOKIE = 'sojourn.sid';
@@ -81,6 +82,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(computeRouter(ctx));
   api.use(auditRouter(ctx));
   api.use(mailboxRouter(ctx));
+  api.use(simulationsRouter());
   api.use((req) => {
     throw new HttpError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
   });
