@@ -48,6 +48,8 @@ export const studyBlocks = mysqlTable(
     scenarios: json('scenarios').$type<unknown[]>().notNull(),
     chart: json('chart').$type<unknown[]>(),
     engineVersion: varchar('engine_version', { length: 20 }).notNull(),
+    /** SHA-256 of everything stored above: a save rewrites only blocks whose hash changed. */
+    contentHash: varchar('content_hash', { length: 64 }).notNull().default(''),
     computedAt: datetime('computed_at', { mode: 'date', fsp: 3 }).notNull(),
   },
   (t) => [primaryKey({ columns: [t.studyId, t.blockId] })],

@@ -1,0 +1,1 @@
+ALTER TABLE `study_blocks` ADD `content_hash` varchar(64) DEFAULT '' NOT NULL;
