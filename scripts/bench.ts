@@ -8,6 +8,7 @@ import type { BenchRow, BenchSuite } from './bench/types';
 const suites: Record<string, () => Promise<{ default: BenchSuite }>> = {
   engine: () => import('./bench/engine'),
   simulation: () => import('./bench/simulation-fit'),
+  studies: () => import('./bench/studies'),
 };
 
 const only = process.argv.slice(2);

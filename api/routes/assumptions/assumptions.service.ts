@@ -74,7 +74,7 @@ export async function createAssumption(ctx: AppContext, engagement: EngagementRo
 export async function updateAssumption(ctx: AppContext, row: AssumptionRow, patch: UpdateAssumption, by: SessionUser, ip?: string): Promise<{ assumption: Assumption; moved: MovedNumber[] }> {
   const { version, ...fields } = patch;
   await assertOwner(ctx, row.engagementId, fields.ownerId);
-  let moved: MovedNumber[] = [];
+  let moved: MovedNumber[];
   try {
     moved = await ctx.db.transaction(async (tx) => {
       const [res] = await tx

@@ -5,6 +5,7 @@ import { assumptionLinkSchema, type BlockConfig } from '../../../shared/schemas/
 /** Catalog field kinds that hold one number, so one number or one assumption link. */
 export const SCALAR_KINDS = new Set(['rate', 'duration', 'count', 'probability', 'scv', 'cost', 'number']);
 const CONFIG_MAX_CHARS = 200_000;
+const strictLink = assumptionLinkSchema.strict();
 
 const looksLikeLink = (v: unknown): v is Record<string, unknown> =>
   typeof v === 'object' && v !== null && !Array.isArray(v) && 'assumption' in v;
@@ -22,7 +23,7 @@ export function checkBlockConfig(config: BlockConfig, path: string): ApiIssue[] 
     for (const [name, value] of Object.entries(inputs)) {
       if (name === 'model') continue;
       if (looksLikeLink(value)) {
-        if (!assumptionLinkSchema.strict().safeParse(value).success) {
+        if (!strictLink.safeParse(value).success) {
           issues.push({ path: `${at}.${name}`, message: 'an assumption link is { "assumption": <id> }' });
         }
         continue;

@@ -1,4 +1,5 @@
-import { eq } from 'drizzle-orm';
+import { createHash } from 'node:crypto';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { BlockConfig, StudyBlockResult } from '../../../shared/schemas/model-block';
 import type { Db } from '../../db/client';
 import { studyBlockAssumptions, studyBlocks } from '../../db/schema/index';
@@ -18,7 +19,9 @@ const CHUNK = 50;
 
 export function toBlockRow(studyId: number, b: ComputedBlock): typeof studyBlocks.$inferInsert {
   const r = b.result;
+  const stored = [b.position, b.config, r.resolvedSpec, r.result, r.error, r.scenarios, r.chart, r.assumptionIds, r.engineVersion];
   return {
+    contentHash: createHash('sha256').update(JSON.stringify(stored)).digest('hex'),
     studyId,
     blockId: r.blockId,
     position: b.position,
@@ -49,13 +52,40 @@ export function fromBlockRow(row: StudyBlockRow, assumptionIds: number[]): Study
   };
 }
 
-/** Replaces every block of a study and its assumption links (links cascade with the blocks). */
+const UPSERT = Object.fromEntries(
+  (['position', 'title', 'config', 'resolvedSpec', 'result', 'error', 'scenarios', 'chart', 'engineVersion', 'contentHash', 'computedAt'] as const).map((k) => [
+    k,
+    sql.raw(`values(\`${studyBlocks[k].name}\`)`),
+  ]),
+);
+
+/**
+ * Makes the stored blocks of a study those given: blocks gone from the document are deleted (their
+ * links cascade), and only blocks whose stored computation changed (by content hash) are written
+ * with their links. A save that edits text rewrites no block at all.
+ */
 export async function replaceStudyBlocks(tx: Tx, studyId: number, blocks: ComputedBlock[]): Promise<void> {
-  await tx.delete(studyBlocks).where(eq(studyBlocks.studyId, studyId));
-  for (let i = 0; i < blocks.length; i += CHUNK) {
-    await tx.insert(studyBlocks).values(blocks.slice(i, i + CHUNK).map((b) => toBlockRow(studyId, b)));
+  const existing = new Map(
+    (await tx.select({ blockId: studyBlocks.blockId, hash: studyBlocks.contentHash }).from(studyBlocks).where(eq(studyBlocks.studyId, studyId))).map((r) => [r.blockId, r.hash]),
+  );
+  const keep = new Set(blocks.map((b) => b.result.blockId));
+  const gone = [...existing.keys()].filter((id) => !keep.has(id));
+  for (let i = 0; i < gone.length; i += CHUNK * 4) {
+    await tx.delete(studyBlocks).where(and(eq(studyBlocks.studyId, studyId), inArray(studyBlocks.blockId, gone.slice(i, i + CHUNK * 4))));
   }
-  const links = blocks.flatMap((b) => b.result.assumptionIds.map((assumptionId) => ({ studyId, blockId: b.result.blockId, assumptionId })));
+  const changed = blocks.map((b) => toBlockRow(studyId, b)).filter((row) => existing.get(row.blockId) !== row.contentHash);
+  for (let i = 0; i < changed.length; i += CHUNK) {
+    await tx.insert(studyBlocks).values(changed.slice(i, i + CHUNK)).onDuplicateKeyUpdate({ set: UPSERT });
+  }
+  const changedIds = changed.map((r) => r.blockId);
+  const rewritten = changedIds.filter((id) => existing.has(id));
+  for (let i = 0; i < rewritten.length; i += CHUNK * 4) {
+    await tx.delete(studyBlockAssumptions).where(and(eq(studyBlockAssumptions.studyId, studyId), inArray(studyBlockAssumptions.blockId, rewritten.slice(i, i + CHUNK * 4))));
+  }
+  const ids = new Set(changedIds);
+  const links = blocks
+    .filter((b) => ids.has(b.result.blockId))
+    .flatMap((b) => b.result.assumptionIds.map((assumptionId) => ({ studyId, blockId: b.result.blockId, assumptionId })));
   for (let i = 0; i < links.length; i += CHUNK * 4) await tx.insert(studyBlockAssumptions).values(links.slice(i, i + CHUNK * 4));
 }
 
