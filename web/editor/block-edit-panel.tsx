@@ -1,4 +1,4 @@
-import { useId } from 'react';
+import { useEffect, useId, useRef } from 'react';
 import { MODEL_CATALOG, type ModelName } from '#shared/queue/index';
 import { BLOCK_TITLE_MAX, type BlockConfig } from '#shared/schemas/model-block';
 import { TIME_UNITS, type TimeUnit } from '#shared/units/units';
@@ -29,6 +29,12 @@ interface BlockEditPanelProps {
  */
 export function BlockEditPanel({ config, fieldErrors, onChange, onClose }: BlockEditPanelProps) {
   const id = useId();
+  const titleInput = useRef<HTMLInputElement>(null);
+  // The editor takes focus back after inserting a block; focus the title once it has settled.
+  useEffect(() => {
+    const t = window.setTimeout(() => titleInput.current?.focus(), 0);
+    return () => window.clearTimeout(t);
+  }, []);
   const { spec } = config;
   const entry = MODEL_CATALOG.find((m) => m.model === spec.model);
   const setInput = (name: string, value: unknown) => {
@@ -56,7 +62,7 @@ export function BlockEditPanel({ config, fieldErrors, onChange, onClose }: Block
           Block title
           <input
             id={`${id}-title`}
-            autoFocus
+            ref={titleInput}
             className={`${inputClass} mt-1.5`}
             maxLength={BLOCK_TITLE_MAX}
             value={config.title}

@@ -1,10 +1,11 @@
 import { useId, useState } from 'react';
 import type { InputField } from '#shared/queue/index';
 import { isAssumptionLink } from '#shared/schemas/model-block';
-import { TIME_UNITS, toFieldValue, type TimeUnit } from '#shared/units/units';
+import { readableDuration, TIME_UNITS, toFieldValue, type TimeUnit } from '#shared/units/units';
 import { inputClass } from '../components/ui/field';
 import { AssumptionPicker, describeAssumption } from './assumption-picker';
 import { useBlockEnvironment } from './block-environment';
+import { DURATION_WORDS } from './format-measure';
 import { fromDisplay, initialDisplayUnit, tidy, toDisplay, unitWord, type DisplayUnit } from './field-units';
 import { ListInput } from './list-input';
 import { NumberInput } from './number-input';
@@ -29,6 +30,14 @@ interface BlockInputFieldProps {
   onChange: (value: unknown) => void;
 }
 
+/** A linked value in words: durations in their most readable unit, four significant figures. */
+function readableValue(v: number, kind: 'rate' | 'duration', timeUnit: TimeUnit): string {
+  const sig = (x: number) => Number(x.toPrecision(4)).toLocaleString('en-GB');
+  if (kind === 'rate') return `${sig(v)} per ${timeUnit}`;
+  const r = readableDuration(v, timeUnit);
+  return `${sig(r.value)} ${DURATION_WORDS[r.unit]}`;
+}
+
 /** One input of a model block: the number in a unit of the author's choice, or a link to an assumption. */
 export function BlockInputField({ field, kind, value, timeUnit, error, onChange }: BlockInputFieldProps) {
   const id = useId();
@@ -46,9 +55,7 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
     control = (
       <p id={id} className="rounded-md border border-accent/40 bg-accent-tint px-3 py-2 text-sm text-accent-strong">
         {linked ? `Linked: ${describeAssumption(linked)}` : `Linked to assumption #${value.assumption} (not in the register)`}
-        {v !== null && kind !== 'probability' && kind !== 'count' && (
-          <span className="text-ink-soft"> = {tidy(v)} {unitWord(kind, kind === 'rate' || kind === 'duration' ? timeUnit : 'plain', timeUnit)}</span>
-        )}
+        {v !== null && (kind === 'rate' || kind === 'duration') && <span className="text-ink-soft"> = {readableValue(v, kind, timeUnit)}</span>}
       </p>
     );
   } else if (picking) {
@@ -86,6 +93,7 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
       <div className="flex gap-2">
         <NumberInput
           id={id}
+          className="min-w-0 flex-1"
           value={n}
           aria-describedby={errorId}
           aria-invalid={error ? true : undefined}
@@ -93,7 +101,7 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
           onValueChange={(typed) => onChange(typed === undefined ? undefined : fromDisplay(typed, kind, shownUnit, timeUnit))}
         />
         {kind === 'rate' || kind === 'duration' ? (
-          <select aria-label={`Unit of ${field.label}`} className={`${inputClass} w-36 shrink-0`} value={shownUnit} onChange={(e) => setUnit(e.target.value as TimeUnit)}>
+          <select aria-label={`Unit of ${field.label}`} className={`${inputClass.replace('w-full', '')} w-36 shrink-0`} value={shownUnit} onChange={(e) => setUnit(e.target.value as TimeUnit)}>
             {TIME_UNITS.map((u) => (
               <option key={u} value={u}>
                 {unitWord(kind, u, timeUnit)}
@@ -117,7 +125,8 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
         {control}
         {error && (
           <p id={errorId} className="mt-1 text-sm font-medium text-danger">
-            {field.label} {error}
+            {/* Engine issues are either fragments ("must be at least 1") or whole sentences. */}
+            {/^[a-z]/.test(error) ? `${field.label} ${error}` : error}
           </p>
         )}
       </div>

@@ -1,6 +1,8 @@
 import type { ReactNode } from 'react';
 import { MODEL_CATALOG } from '#shared/queue/index';
 import type { BlockConfig, StudyBlockResult } from '#shared/schemas/model-block';
+import type { TimeUnit } from '#shared/units/units';
+import { DURATION_WORDS } from './format-measure';
 import { BlockChart } from './block-chart';
 import type { ChartRow } from './chart-spec';
 import { IntervalTable } from './interval-table';
@@ -21,9 +23,13 @@ interface BlockResultsProps {
 
 export const modelLabel = (model: string) => MODEL_CATALOG.find((m) => m.model === model)?.label ?? model;
 
-/** The label of the input a chart varies (“Servers c”), for its axis. */
-export function inputLabel(model: string, name: string): string {
-  return MODEL_CATALOG.find((m) => m.model === model)?.inputs.find((f) => f.name === name)?.label ?? name;
+/** The label of the input a chart varies, with its unit for its axis (“Arrival rate λ (per hour)”). */
+export function inputLabel(model: string, name: string, timeUnit?: TimeUnit): string {
+  const field = MODEL_CATALOG.find((m) => m.model === model)?.inputs.find((f) => f.name === name);
+  if (!field) return name;
+  if (timeUnit && (field.kind === 'rate' || field.kind === 'cost')) return `${field.label} (per ${timeUnit})`;
+  if (timeUnit && field.kind === 'duration') return `${field.label} (${DURATION_WORDS[timeUnit]})`;
+  return field.label;
 }
 
 /**
@@ -59,13 +65,13 @@ export function BlockResults({ config, outcome, preview, crossCheck }: BlockResu
           Preview — not yet confirmed by the server
         </p>
       )}
-      {outcome.status === 'error' && outcome.error ? (
-        <p role="alert" className="rounded-md border border-danger/40 bg-danger-tint px-3 py-2 font-sans text-sm text-danger">
-          No result: {outcome.error.message}
+      {outcome.status === 'error' && outcome.error && (
+        <p role="alert" className="mb-3 rounded-md border border-danger/40 bg-danger-tint px-3 py-2 font-sans text-sm text-danger">
+          {outcome.scenarios.length ? 'No result for the base case' : 'No result'}: {outcome.error.message}
         </p>
-      ) : (
-        rows.length > 0 && <ResultsTable caption={config.title || modelLabel(model)} columns={columns.map((c) => c.label)} rows={rows} />
       )}
+      {/* Options may still have answers when the base case has none. */}
+      {rows.length > 0 && columns.some((c) => c.result) && <ResultsTable caption={config.title || modelLabel(model)} columns={columns.map((c) => c.label)} rows={rows} />}
       {intervals && <IntervalTable intervals={intervals} timeUnit={config.timeUnit} criterion={criterion} />}
       {(result || warnings.length > 0) && <ResultNotes method={methodOf(result)} warnings={warnings} />}
       {chartRows && chartRows.length > 0 && (
@@ -73,7 +79,7 @@ export function BlockResults({ config, outcome, preview, crossCheck }: BlockResu
           rows={chartRows}
           model={chartModel}
           parameter={chartParameter}
-          parameterLabel={inputLabel(chartModel, chartParameter)}
+          parameterLabel={inputLabel(chartModel, chartParameter, config.timeUnit)}
           timeUnit={config.timeUnit}
           criterion={criterion}
           description={`Chart of ${chartRows.length} points against ${inputLabel(chartModel, chartParameter)}`}

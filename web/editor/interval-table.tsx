@@ -18,7 +18,7 @@ export function IntervalTable({ intervals, timeUnit, criterion }: { intervals: r
   const cols = [alignDecimals(rates.texts), alignDecimals(achieved.texts), alignDecimals(rho.texts)];
   return (
     <div className="mt-4 overflow-x-auto">
-      <table className="w-full border-collapse font-sans text-sm">
+      <table className="results-table w-full border-collapse font-sans text-sm">
         <caption className="pb-1 text-left text-xs font-semibold text-ink-soft">Servers per interval</caption>
         <thead>
           <tr className="border-b border-rule-strong text-xs text-ink-soft">

@@ -41,7 +41,7 @@ export function NumberInput({ value, onValueChange, className = '', ...rest }: N
         const n = parse(e.target.value);
         if (n !== null) onValueChange(n);
       }}
-      className={`${inputClass} text-right tabular-nums ${className}`}
+      className={`${/(^|\s)w-/.test(className) ? inputClass.replace('w-full', '') : inputClass} text-right tabular-nums ${className}`}
     />
   );
 }
