@@ -53,3 +53,22 @@ describe('creating a study from a template', () => {
     expect(JSON.stringify(study.document)).toContain(`"assumption":${visitors.id}`);
   });
 });
+
+describe('GET /api/templates and creating from each of them', () => {
+  it('lists the templates of templates/ and makes a study from each whose blocks all compute', async () => {
+    const list = await consultant.get('/api/templates');
+    expect(list.status).toBe(200);
+    const templates = list.body.templates as { key: string; blockCount: number; assumptionCount: number }[];
+    expect(templates.length).toBeGreaterThan(0);
+    const engagement = await makeEngagement(t.ctx, [user.id], 'Templates: every template');
+    for (const tpl of templates) {
+      const res = await consultant.post(`/api/engagements/${engagement}/studies`, { title: `From ${tpl.key}`, templateKey: tpl.key });
+      expect(res.status).toBe(201);
+      const blocks = Object.values(res.body.study.blocks as Record<string, { status: string; error: unknown }>);
+      expect(blocks).toHaveLength(tpl.blockCount);
+      expect(blocks.filter((b) => b.status !== 'ok')).toEqual([]);
+    }
+    const register = (await consultant.get(`/api/engagements/${engagement}/assumptions`)).body.assumptions as unknown[];
+    expect(register.length).toBeGreaterThan(0);
+  });
+});
