@@ -21,6 +21,12 @@ export const AUDIT_ACTIONS = [
   'assumption_created',
   'assumption_updated',
   'assumption_deleted',
+  'revision_submitted',
+  'revision_approved',
+  'changes_requested',
+  'revision_released',
+  'release_failed',
+  'deliverable_downloaded',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 

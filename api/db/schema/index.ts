@@ -5,3 +5,5 @@ export * from './sessions';
 export * from './assumptions';
 export * from './studies';
 export * from './mail-outbox';
+export * from './revisions';
+export * from './datasets';
