@@ -7,6 +7,7 @@ export const paths = {
   invitation: (token: string) => `/invitations/${encodeURIComponent(token)}`,
   engagements: '/engagements',
   engagement: (id: number | string) => `/engagements/${id}`,
+  assumptions: (engagementId: number | string) => `/engagements/${engagementId}/assumptions`,
   study: (id: number | string) => `/studies/${id}`,
   studyReader: (id: number | string) => `/studies/${id}/read`,
   adminUsers: '/admin/users',

@@ -15,6 +15,7 @@ const ResetPasswordScreen = lazyScreen(() => import('../features/auth/components
 const AcceptInvitationScreen = lazyScreen(() => import('../features/auth/components/accept-invitation-screen'), 'AcceptInvitationScreen');
 const EngagementsScreen = lazyScreen(() => import('../features/engagements/components/engagements-screen'), 'EngagementsScreen');
 const EngagementOverviewScreen = lazyScreen(() => import('../features/engagements/components/engagement-overview-screen'), 'EngagementOverviewScreen');
+const AssumptionsScreen = lazyScreen(() => import('../features/assumptions/components/assumptions-screen'), 'AssumptionsScreen');
 const AdminEngagementsScreen = lazyScreen(() => import('../features/engagements/components/admin-engagements-screen'), 'AdminEngagementsScreen');
 const AdminUsersScreen = lazyScreen(() => import('../features/users/components/admin-users-screen'), 'AdminUsersScreen');
 const AuditScreen = lazyScreen(() => import('../features/audit/components/audit-screen'), 'AuditScreen');
@@ -47,6 +48,11 @@ export const router = createBrowserRouter([
           { index: true, element: <Navigate to={paths.engagements} replace /> },
           { path: paths.engagements, element: <EngagementsScreen /> },
           { path: '/engagements/:id', element: <EngagementOverviewScreen /> },
+          {
+            // Clients see released deliverables only; the API refuses them the register too.
+            element: <RequireRole roles={['admin', 'partner', 'consultant']} />,
+            children: [{ path: '/engagements/:id/assumptions', element: <AssumptionsScreen /> }],
+          },
           { path: '/studies/:id', element: <StudyEditorScreen /> },
           { path: '/studies/:id/read', element: <StudyReaderScreen /> },
           {

@@ -14,6 +14,7 @@ import { CautionsNote } from './cautions-note';
 import { EngagementBadges } from './engagement-badges';
 import { EngagementEditPanel } from './engagement-edit-panel';
 import { MembersPanel } from './members-panel';
+import { StudiesSection } from '../../studies/components/studies-section';
 import { StudiesPlaceholder } from './studies-placeholder';
 
 export function EngagementOverviewScreen() {
@@ -72,7 +73,7 @@ function EngagementOverview({ id }: { id: number }) {
           </section>
         )}
         {e.safetyCritical && <CautionsNote />}
-        <StudiesPlaceholder forClient={user.role === 'client'} />
+        {user.role === 'client' ? <StudiesPlaceholder /> : <StudiesSection engagementId={e.id} canWrite={!isAdmin} />}
         <MembersPanel engagementId={e.id} canManage={isAdmin} />
       </div>
     </>
