@@ -9,6 +9,8 @@ export interface ChartRow {
   value: number | null;
 }
 
+const WHOLE = new Set(['servers', 'capacity', 'population', 'n']);
+
 /** Colours drawn from the app's palette: the accent first, then calm tones that print well. */
 const PALETTE = ['#1e5a5f', '#b5651d', '#5b4a8a', '#6b7f2a'];
 
@@ -40,7 +42,8 @@ export function chartSpec(rows: readonly ChartRow[], opts: { model: string; para
     transform: [{ filter: { field: 'panel', equal: panel } }],
     mark: { type: 'line' as const, point: true, strokeWidth: 2 },
     encoding: {
-      x: { field: 'x', type: 'quantitative' as const, title: opts.parameterLabel, scale: { zero: false } },
+      // Server counts and other whole inputs get whole ticks only.
+      x: { field: 'x', type: 'quantitative' as const, title: opts.parameterLabel, scale: { zero: false }, axis: WHOLE.has(opts.parameter) ? { tickMinStep: 1, format: 'd' } : {} },
       y: { field: 'value', type: 'quantitative' as const, title: panel },
       color: { field: 'measure', type: 'nominal' as const, title: null, scale: { range: PALETTE }, legend: { orient: 'bottom' as const } },
       tooltip: [

@@ -22,7 +22,7 @@ function ReaderBlock({ attrs, blocks }: { attrs: Record<string, unknown>; blocks
   if (!config?.spec) return null;
   const full: BlockConfig = { ...config, scenarios: config.scenarios ?? [], chart: config.chart ?? null, timeUnit: config.timeUnit ?? 'hour' };
   return (
-    <figure className="reader-block my-8 break-inside-avoid">
+    <figure className="reader-block model-block my-8 break-inside-avoid">
       <figcaption className="mb-2 font-serif text-base font-bold">{config.title || modelLabel(config.spec.model)}</figcaption>
       <BlockResults config={full} outcome={blocks[String(attrs.blockId)] ?? null} preview={false} />
     </figure>
