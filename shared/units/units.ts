@@ -72,6 +72,10 @@ export function toFieldValue(value: number, unit: UnitCode, fieldKind: string, b
     if (unit === 'percent') return value / 100;
     return unit === 'fraction' || unit === 'number' ? value : null;
   }
-  if (info.dimension === 'rate' || info.dimension === 'duration') return null;
+  if (fieldKind === 'cost') {
+    // Costs are money per unit of time, so they convert like rates (60 per hour = 1 per minute).
+    return unit === 'currency_per_hour' ? convertRate(value, 'hour', blockUnit) : unit === 'number' ? value : null;
+  }
+  if (info.dimension === 'rate' || info.dimension === 'duration' || info.dimension === 'cost') return null;
   return value;
 }

@@ -7,6 +7,10 @@ import { BlockEditPanel } from './block-edit-panel';
 import { previewBlock } from './block-preview';
 import { BlockResults, modelLabel } from './block-results';
 import { freshBlocks } from './fresh-blocks';
+import { SimulationCheck } from '../features/simulation/components/simulation-check';
+
+/** Models the server-side simulator can run (see shared/queue/sim/from-spec.ts). */
+const SIMULATED_MODELS = new Set(['M/M/1', 'M/M/c', 'M/M/c/K', 'M/M/c/c', 'M/M/c+M', 'M/G/1', 'M/D/1', 'G/G/c']);
 
 /**
  * The block's config with defaults filled in, or null when the attribute has no spec. Not a zod
@@ -89,8 +93,15 @@ export function ModelBlockView({ node, updateAttributes, deleteNode, selected }:
           config={config}
           outcome={outcome}
           preview={!confirmed && outcome !== null}
-          // Slot for a later server-side simulation cross-check of this block.
-          crossCheck={null}
+          // Offered only on results the server confirmed: the check simulates exactly what it computed.
+          crossCheck={
+            env.editable && confirmed && server?.status === 'ok' && server.resolvedSpec && server.result && SIMULATED_MODELS.has(config.spec.model) ? (
+              <details className="mt-3 font-sans text-sm">
+                <summary className="cursor-pointer text-ink-soft">Check these figures by simulation</summary>
+                <SimulationCheck spec={server.resolvedSpec as Parameters<typeof SimulationCheck>[0]['spec']} analytic={server.result as Parameters<typeof SimulationCheck>[0]['analytic']} />
+              </details>
+            ) : null
+          }
         />
       ) : (
         <p className="font-sans text-sm text-danger">This block’s settings could not be read. Remove it and insert a new one.</p>
