@@ -12,6 +12,7 @@ import { assumptionsRouter } from './routes/assumptions/assumptions.router';
 import { auditRouter } from './routes/audit/audit.router';
 import { authRouter } from './routes/auth/auth.router';
 import { computeRouter } from './routes/compute/compute.router';
+import { datasetsRouter } from './routes/datasets/datasets.router';
 import { engagementsRouter } from './routes/engagements/engagements.router';
 import { healthRouter } from './routes/health/health.router';
 import { invitationsRouter } from './routes/invitations/invitations.router';
@@ -79,6 +80,7 @@ export function createApp(ctx: AppContext): Express {
   api.use(engagementsRouter(ctx));
   api.use(studiesRouter(ctx));
   api.use(assumptionsRouter(ctx));
+  api.use(datasetsRouter(ctx));
   api.use(computeRouter(ctx));
   api.use(auditRouter(ctx));
   api.use(mailboxRouter(ctx));
