@@ -12,7 +12,7 @@ import { formatRow } from './measure-format';
 import { numberTable } from './number-table';
 import { COLOURS } from './pdf-theme';
 
-const h1 = (text: string): Content => ({ text, style: 'h1', tocItem: true, tocStyle: { bold: true }, tocMargin: [0, 5, 0, 0] }) as Content;
+const h1 = (text: string): Content => ({ text, style: 'h1', tocItem: true, tocStyle: { bold: true }, tocMargin: [0, 5, 0, 0], headlineLevel: 1 }) as Content;
 
 export function assumptionsAppendix(assumptions: FrozenAssumption[]): Content[] {
   const out: Content[] = [{ ...(h1('Appendix: assumptions') as object), pageBreak: 'before' } as Content];

@@ -13,9 +13,12 @@ const SAFETY_LEAD =
 
 /** The cautions section at the end of the report (always present). */
 export function cautionsSection(): Content[] {
+  // Heading and text stay on one page together.
   return [
-    { text: 'Cautions', style: 'h1', tocItem: true, tocStyle: { bold: true }, tocMargin: [0, 5, 0, 0] } as Content,
-    { stack: [txt(CAUTION_SENTENCES.join(' '), { style: 'paragraph' })], unbreakable: true },
+    {
+      stack: [{ text: 'Cautions', style: 'h1', tocItem: true, tocStyle: { bold: true }, tocMargin: [0, 5, 0, 0] }, txt(CAUTION_SENTENCES.join(' '), { style: 'paragraph' })],
+      unbreakable: true,
+    } as Content,
   ];
 }
 
