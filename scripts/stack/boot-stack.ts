@@ -8,6 +8,7 @@ import { runMigrations } from '../../api/db/migrate';
 import { startS3Fake, S3_FAKE_CREDENTIALS } from '../../fakes/s3-fake';
 import { startSmtpFake } from '../../fakes/smtp-fake';
 import { seedDemo } from '../../fakes/demo-seed';
+import { seedDemoDataset } from '../../fakes/demo-event-log-seed';
 import { ensureDatabase, ensureMariadbInstalled, startMariadb } from './mariadb';
 
 export interface StackOptions {
@@ -55,6 +56,15 @@ export async function bootStack(o: StackOptions): Promise<Stack> {
     const smtp = await startSmtpFake({ smtpPort: o.smtpPort, httpPort: o.mailFakePort });
     stops.push(() => smtp.stop());
     o.log(`S3 fake on ${s3.endpoint}, SMTP fake on ${smtp.smtpUrl} (mailbox ${smtp.httpUrl})`);
+
+    // The demo event log needs S3, so it is seeded after the fake is up (once: it checks by name).
+    const seeding = createDb(databaseUrl);
+    try {
+      const s3Config = { endpoint: s3.endpoint, region: 'us-east-1', bucket: 'sojourn', ...S3_FAKE_CREDENTIALS, forcePathStyle: true };
+      if (await seedDemoDataset(seeding.db, s3Config)) o.log('Demo event log uploaded and fitted.');
+    } finally {
+      await seeding.pool.end();
+    }
 
     return {
       env: {
