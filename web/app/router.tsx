@@ -23,6 +23,12 @@ const MailboxScreen = lazyScreen(() => import('../features/mailbox/components/ma
 // The editor (TipTap) and the reader are their own chunks: only a study route loads them.
 const StudyEditorScreen = lazyScreen(() => import('../features/study-editor/components/study-editor-screen'), 'StudyEditorScreen');
 const StudyReaderScreen = lazyScreen(() => import('../features/study-reader/components/study-reader-screen'), 'StudyReaderScreen');
+const StudyRevisionsScreen = lazyScreen(() => import('../features/revisions/components/study-revisions-screen'), 'StudyRevisionsScreen');
+const RevisionScreen = lazyScreen(() => import('../features/revisions/components/revision-screen'), 'RevisionScreen');
+const CompareScreen = lazyScreen(() => import('../features/revisions/components/compare-screen'), 'CompareScreen');
+const ReviewQueueScreen = lazyScreen(() => import('../features/revisions/components/review-queue-screen'), 'ReviewQueueScreen');
+const DeliverablesScreen = lazyScreen(() => import('../features/deliverables/components/deliverables-screen'), 'DeliverablesScreen');
+const VerifyScreen = lazyScreen(() => import('../features/verify/components/verify-screen'), 'VerifyScreen');
 
 export const router = createBrowserRouter([
   {
@@ -55,6 +61,21 @@ export const router = createBrowserRouter([
           },
           { path: '/studies/:id', element: <StudyEditorScreen /> },
           { path: '/studies/:id/read', element: <StudyReaderScreen /> },
+          { path: paths.deliverables, element: <DeliverablesScreen /> },
+          { path: paths.verify, element: <VerifyScreen /> },
+          {
+            // Revisions and their review belong to the firm; clients get the released PDF only.
+            element: <RequireRole roles={['admin', 'partner', 'consultant']} />,
+            children: [
+              { path: '/studies/:id/revisions', element: <StudyRevisionsScreen /> },
+              { path: '/revisions/:id', element: <RevisionScreen /> },
+              { path: '/revisions/:id/compare/:other', element: <CompareScreen /> },
+            ],
+          },
+          {
+            element: <RequireRole roles={['partner']} />,
+            children: [{ path: paths.reviews, element: <ReviewQueueScreen /> }],
+          },
           {
             element: <RequireRole roles={['admin']} />,
             children: [

@@ -9,6 +9,7 @@ type Query = Record<string, string | number | boolean | undefined | null>;
 
 interface RequestOptions<S extends z.ZodType | undefined> {
   method?: Method;
+  /** JSON by default; a FormData or Blob (a file upload) is sent as it is. */
   body?: unknown;
   query?: Query;
   /** Checks the answer against the shared contract, so drift shows as one clear error. */
@@ -44,14 +45,17 @@ async function readError(res: Response): Promise<ApiError> {
 }
 
 /**
- * The only way the web app talks to the API: same-origin cookies, JSON both ways, the CSRF
+ * The only way the web app talks to the API: same-origin cookies, JSON both ways (or a file up), the CSRF
  * header on every state-changing request, and one error type for every failure.
  */
 export async function api<S extends z.ZodType | undefined = undefined>(path: string, options: RequestOptions<S> = {}): Promise<Result<S>> {
   const method = options.method ?? 'GET';
   const headers: Record<string, string> = { accept: 'application/json' };
   if (method !== 'GET') headers[CSRF_HEADER] = CSRF_HEADER_VALUE;
-  if (options.body !== undefined) headers['content-type'] = 'application/json';
+  // Files go as they are: FormData sets its own multipart boundary, a Blob names its type.
+  const raw = options.body instanceof FormData || options.body instanceof Blob;
+  if (options.body instanceof Blob) headers['content-type'] = options.body.type || 'application/octet-stream';
+  else if (options.body !== undefined && !raw) headers['content-type'] = 'application/json';
 
   let res: Response;
   try {
@@ -59,7 +63,7 @@ export async function api<S extends z.ZodType | undefined = undefined>(path: str
       method,
       headers,
       credentials: 'same-origin',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body: options.body === undefined ? undefined : raw ? (options.body as BodyInit) : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (err) {

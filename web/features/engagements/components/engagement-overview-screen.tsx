@@ -15,7 +15,7 @@ import { EngagementBadges } from './engagement-badges';
 import { EngagementEditPanel } from './engagement-edit-panel';
 import { MembersPanel } from './members-panel';
 import { StudiesSection } from '../../studies/components/studies-section';
-import { StudiesPlaceholder } from './studies-placeholder';
+import { EngagementDeliverables } from '../../deliverables/components/engagement-deliverables';
 
 export function EngagementOverviewScreen() {
   const id = Number(useParams().id);
@@ -73,7 +73,7 @@ function EngagementOverview({ id }: { id: number }) {
           </section>
         )}
         {e.safetyCritical && <CautionsNote />}
-        {user.role === 'client' ? <StudiesPlaceholder /> : <StudiesSection engagementId={e.id} canWrite={!isAdmin} />}
+        {user.role === 'client' ? <EngagementDeliverables engagementId={e.id} /> : <StudiesSection engagementId={e.id} canWrite={!isAdmin} />}
         <MembersPanel engagementId={e.id} canManage={isAdmin} />
       </div>
     </>

@@ -11,6 +11,7 @@ import { StudyEditor } from '../../../editor/study-editor';
 import { engagementAssumptionsQuery } from '../api/study-queries';
 import { useSaveAsCopy } from '../api/study-mutations';
 import { useAutosave } from '../api/use-autosave';
+import { SubmitRevisionButton } from '../../revisions/components/submit-revision-button';
 import { ConflictBanner } from './conflict-banner';
 import { SaveIndicator } from './save-indicator';
 import { StudyStatusBadge } from './study-status-badge';
@@ -53,6 +54,10 @@ export function StudyWorkspace({ study, onReload }: { study: StudyDetail; onRelo
         </Link>
         <div className="flex items-center gap-4">
           <SaveIndicator status={autosave.status} savedAt={autosave.savedAt} />
+          <Link to={paths.studyRevisions(study.id)} className="underline-offset-4 hover:underline">
+            Revisions
+          </Link>
+          {draft && <SubmitRevisionButton studyId={study.id} saveStatus={autosave.status} saveNow={autosave.saveNow} onSubmitted={onReload} />}
           <Link to={paths.studyReader(study.id)} className="rounded-md border border-rule-strong px-3 py-1.5 text-ink no-underline hover:border-ink-soft">
             Reading view
           </Link>

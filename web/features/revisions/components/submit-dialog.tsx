@@ -1,0 +1,75 @@
+import { useEffect, useId, useRef } from 'react';
+import { Link } from 'react-router-dom';
+import { paths } from '../../../app/paths';
+import { Banner } from '../../../components/ui/banner';
+import { Button } from '../../../components/ui/button';
+
+interface SubmitDialogProps {
+  number: number;
+  working: boolean;
+  error: string | null;
+  submitted: { id: number; number: number } | null;
+  onConfirm: () => void;
+  onClose: () => void;
+}
+
+/**
+ * The confirmation before submitting, then its outcome, in a native modal <dialog> (focus kept
+ * inside, Escape closes, focus returns to the button that opened it).
+ */
+export function SubmitDialog({ number, working, error, submitted, onConfirm, onClose }: SubmitDialogProps) {
+  const ref = useRef<HTMLDialogElement>(null);
+  const titleId = useId();
+  useEffect(() => {
+    const dialog = ref.current;
+    if (dialog && !dialog.open) dialog.showModal();
+    return () => dialog?.close();
+  }, []);
+
+  return (
+    <dialog ref={ref} aria-labelledby={titleId} onClose={onClose} className="m-auto w-[min(34rem,calc(100vw-2rem))] rounded-lg border border-rule bg-sheet p-0 text-ink shadow-xl backdrop:bg-ink/40">
+      <div className="flex flex-col gap-4 px-6 py-5 text-sm">
+        <h2 id={titleId} className="text-xl font-bold">
+          {submitted ? `Revision ${submitted.number} submitted` : `Submit as revision ${number}?`}
+        </h2>
+        {submitted ? (
+          <>
+            <Banner tone="ok">
+              The partners of this engagement were told. The study is read-only while they review it; if they ask for changes you can edit and submit
+              again.
+            </Banner>
+            <div className="flex flex-wrap gap-2">
+              <Link to={paths.revision(submitted.id)} className="rounded-md bg-accent px-4 py-2 font-medium text-white no-underline hover:bg-accent-strong">
+                Open revision {submitted.number}
+              </Link>
+              <Button onClick={onClose} autoFocus>
+                Close
+              </Button>
+            </div>
+          </>
+        ) : (
+          <>
+            <p>
+              The current text, every model block's inputs and results and the assumptions they use become <strong>revision {number}</strong>, frozen
+              as they are now. A partner then reads it and signs it off or asks for changes.
+            </p>
+            <p className="text-ink-soft">Anything not yet saved is saved first.</p>
+            {error && (
+              <Banner tone="danger" title="Not submitted">
+                {error}
+              </Banner>
+            )}
+            <div className="flex flex-wrap gap-2">
+              <Button variant="primary" busy={working} onClick={onConfirm} autoFocus>
+                {working ? 'Submitting…' : `Submit revision ${number}`}
+              </Button>
+              <Button variant="quiet" onClick={onClose} disabled={working}>
+                Cancel
+              </Button>
+            </div>
+          </>
+        )}
+      </div>
+    </dialog>
+  );
+}
