@@ -3,7 +3,7 @@ import { navItemsFor } from './nav-items';
 
 describe('navItemsFor', () => {
   it('gives an administrator every area', () => {
-    expect(navItemsFor('admin').map((i) => i.label)).toEqual(['Engagements', 'Deliverables', 'People', 'Engagement admin', 'Audit trail', 'Mailbox']);
+    expect(navItemsFor('admin').map((i) => i.label)).toEqual(['Engagements', 'People', 'Engagement admin', 'Audit trail', 'Mailbox']);
   });
   it('gives a partner the review list and the deliverables', () => {
     expect(navItemsFor('partner').map((i) => i.to)).toEqual(['/engagements', '/reviews', '/deliverables']);

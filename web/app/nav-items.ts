@@ -14,7 +14,7 @@ export interface NavItem {
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: paths.engagements, label: 'Engagements', roles: ['admin', 'partner', 'consultant', 'client'] },
   { to: paths.reviews, label: 'Waiting for review', roles: ['partner'] },
-  { to: paths.deliverables, label: 'Deliverables', roles: ['admin', 'partner', 'client'] },
+  { to: paths.deliverables, label: 'Deliverables', roles: ['partner', 'client'] },
   { to: paths.verify, label: 'Verify a copy', roles: ['client'] },
   { to: paths.adminUsers, label: 'People', roles: ['admin'] },
   { to: paths.adminEngagements, label: 'Engagement admin', roles: ['admin'] },

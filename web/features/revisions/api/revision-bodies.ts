@@ -16,6 +16,8 @@ import {
 export const revisionListBody = z.object({ revisions: z.array(revisionSummarySchema) });
 export const revisionBody = z.object({ revision: revisionDetailSchema });
 export const revisionSummaryBody = z.object({ revision: revisionSummarySchema });
+/** What an action answers with, whether the API sends the summary or the whole detail: the id, number and state. */
+export const revisionRefBody = z.object({ revision: revisionSummarySchema.pick({ id: true, number: true, status: true }) });
 export const commentListBody = z.object({ comments: z.array(revisionCommentSchema) });
 export const commentBody = z.object({ comment: revisionCommentSchema });
 export const comparisonBody = z.object({ comparison: revisionComparisonSchema });

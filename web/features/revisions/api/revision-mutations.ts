@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CreateComment, Decision } from '#shared/schemas/revisions';
 import { api } from '../../../lib/api-client';
-import { commentBody, revisionBody } from './revision-bodies';
+import { commentBody, revisionRefBody } from './revision-bodies';
 import { revisionKeys } from './revision-keys';
 
 /**
@@ -12,7 +12,7 @@ export function useSubmitRevision(studyId: number) {
   const refresh = useRefreshAfter();
   return useMutation({
     mutationFn: async (studyVersion: number | undefined) =>
-      (await api(`/api/studies/${studyId}/revisions`, { method: 'POST', body: { studyVersion }, schema: revisionBody })).revision,
+      (await api(`/api/studies/${studyId}/revisions`, { method: 'POST', body: { studyVersion }, schema: revisionRefBody })).revision,
     onSuccess: refresh,
   });
 }
@@ -26,7 +26,7 @@ function useRefreshAfter() {
 export function useDecideRevision(id: number) {
   const refresh = useRefreshAfter();
   return useMutation({
-    mutationFn: async (decision: Decision) => (await api(`/api/revisions/${id}/decision`, { method: 'POST', body: decision, schema: revisionBody })).revision,
+    mutationFn: async (decision: Decision) => (await api(`/api/revisions/${id}/decision`, { method: 'POST', body: decision, schema: revisionRefBody })).revision,
     onSuccess: refresh,
   });
 }
@@ -35,7 +35,7 @@ export function useDecideRevision(id: number) {
 export function useReleaseRevision(id: number) {
   const refresh = useRefreshAfter();
   return useMutation({
-    mutationFn: async () => (await api(`/api/revisions/${id}/release`, { method: 'POST', schema: revisionBody })).revision,
+    mutationFn: async () => (await api(`/api/revisions/${id}/release`, { method: 'POST', schema: revisionRefBody })).revision,
     onSettled: refresh,
   });
 }
