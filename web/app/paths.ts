@@ -8,6 +8,8 @@ export const paths = {
   engagements: '/engagements',
   engagement: (id: number | string) => `/engagements/${id}`,
   assumptions: (engagementId: number | string) => `/engagements/${engagementId}/assumptions`,
+  datasets: (engagementId: number | string) => `/engagements/${engagementId}/datasets`,
+  dataset: (id: number | string) => `/datasets/${id}`,
   study: (id: number | string) => `/studies/${id}`,
   studyReader: (id: number | string) => `/studies/${id}/read`,
   studyRevisions: (id: number | string) => `/studies/${id}/revisions`,

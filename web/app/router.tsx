@@ -15,6 +15,8 @@ const ResetPasswordScreen = lazyScreen(() => import('../features/auth/components
 const AcceptInvitationScreen = lazyScreen(() => import('../features/auth/components/accept-invitation-screen'), 'AcceptInvitationScreen');
 const EngagementsScreen = lazyScreen(() => import('../features/engagements/components/engagements-screen'), 'EngagementsScreen');
 const EngagementOverviewScreen = lazyScreen(() => import('../features/engagements/components/engagement-overview-screen'), 'EngagementOverviewScreen');
+const DatasetsScreen = lazyScreen(() => import('../features/datasets/components/datasets-screen'), 'DatasetsScreen');
+const DatasetScreen = lazyScreen(() => import('../features/datasets/components/dataset-screen'), 'DatasetScreen');
 const AssumptionsScreen = lazyScreen(() => import('../features/assumptions/components/assumptions-screen'), 'AssumptionsScreen');
 const AdminEngagementsScreen = lazyScreen(() => import('../features/engagements/components/admin-engagements-screen'), 'AdminEngagementsScreen');
 const AdminUsersScreen = lazyScreen(() => import('../features/users/components/admin-users-screen'), 'AdminUsersScreen');
@@ -57,7 +59,11 @@ export const router = createBrowserRouter([
           {
             // Clients see released deliverables only; the API refuses them the register too.
             element: <RequireRole roles={['admin', 'partner', 'consultant']} />,
-            children: [{ path: '/engagements/:id/assumptions', element: <AssumptionsScreen /> }],
+            children: [
+              { path: '/engagements/:id/assumptions', element: <AssumptionsScreen /> },
+              { path: '/engagements/:id/datasets', element: <DatasetsScreen /> },
+              { path: '/datasets/:id', element: <DatasetScreen /> },
+            ],
           },
           { path: '/studies/:id', element: <StudyEditorScreen /> },
           { path: '/studies/:id/read', element: <StudyReaderScreen /> },

@@ -16,6 +16,7 @@ import { EngagementEditPanel } from './engagement-edit-panel';
 import { MembersPanel } from './members-panel';
 import { StudiesSection } from '../../studies/components/studies-section';
 import { EngagementDeliverables } from '../../deliverables/components/engagement-deliverables';
+import { DatasetsLink } from '../../datasets/components/datasets-link';
 
 export function EngagementOverviewScreen() {
   const id = Number(useParams().id);
@@ -74,6 +75,7 @@ function EngagementOverview({ id }: { id: number }) {
         )}
         {e.safetyCritical && <CautionsNote />}
         {user.role === 'client' ? <EngagementDeliverables engagementId={e.id} /> : <StudiesSection engagementId={e.id} canWrite={!isAdmin} />}
+        {user.role !== 'client' && <DatasetsLink engagementId={e.id} />}
         <MembersPanel engagementId={e.id} canManage={isAdmin} />
       </div>
     </>
