@@ -21,7 +21,8 @@ function Fact({ label, value, note }: { label: string; value: string; note?: str
 export function FitView({ fit }: { fit: DatasetFit }) {
   const d = fit.demand;
   const s = fit.service;
-  const warnings = [...d.warnings, ...(s?.warnings ?? [])];
+  // The exponential verdict has its own banner; the cautions list keeps the other warnings.
+  const warnings = [...d.warnings, ...(s?.warnings ?? []).filter((w) => w.code !== 'not_exponential' && w.code !== 'exponential_doubtful')];
   const verdict = s ? verdictWords(s.goodnessOfFit, s.scv) : null;
   return (
     <div className="flex flex-col gap-8">
