@@ -8,7 +8,9 @@ import type { BenchRow, BenchSuite } from './bench/types';
 const suites: Record<string, () => Promise<{ default: BenchSuite }>> = {
   engine: () => import('./bench/engine'),
   simulation: () => import('./bench/simulation-fit'),
+  pdf: () => import('./bench/pdf'),
   studies: () => import('./bench/studies'),
+  datasets: () => import('./bench/datasets'),
 };
 
 const only = process.argv.slice(2);

@@ -44,29 +44,34 @@ function xTitle(config: BlockConfig, model: unknown): string {
   return field.label;
 }
 
-/** SVG of the block's chart, or null when it has no rows. Width in PDF points. */
-export async function chartSvg(config: BlockConfig, block: StudyBlockResult, width = 440): Promise<string | null> {
-  const rows = block.chart;
-  if (!rows || rows.length === 0) return null;
-  const model = block.resolvedSpec?.model ?? config.spec.model;
-  const measures = [...new Set(rows.map((r) => r.measure))];
-  const panels = new Map(measures.map((m) => [m, panelFor(m, model, config, rows.filter((r) => r.measure === m && r.value !== null).map((r) => r.value as number))]));
-  const data = rows.map((r) => {
-    const p = panels.get(r.measure) as Panel;
-    return { x: r.x, panel: p.title, value: r.value === null ? null : r.value * p.scale };
-  });
-  const height = measures.length > 1 ? 110 : 170;
-  // Server counts and other whole numbers get whole-number ticks.
-  const countAxis = MODEL_CATALOG.find((e) => e.model === model)?.inputs.find((f) => f.name === config.chart?.parameter)?.kind === 'count';
+/**
+ * Compiling vega-lite and parsing the vega spec cost most of a chart's time, and every block chart
+ * has the same shape: the runtime is cached per (panels, x title, axis kind, width) and each chart
+ * only feeds its rows into a fresh View.
+ */
+const runtimes = new Map<string, vega.Runtime>();
+
+function runtimeFor(panels: number, title: string, countAxis: boolean, width: number): vega.Runtime {
+  const key = JSON.stringify([panels, title, countAxis, width]);
+  const cached = runtimes.get(key);
+  if (cached) return cached;
   const spec: TopLevelSpec = {
-    data: { values: data },
-    facet: { row: { field: 'panel', type: 'nominal', title: null, sort: measures.map((m) => (panels.get(m) as Panel).title), header: { labelAngle: 0, labelAlign: 'left', labelAnchor: 'start', labelOrient: 'top', labelFontSize: 9, labelColor: COLOURS.ink } } },
+    data: { name: 'rows' },
+    facet: {
+      row: {
+        field: 'panel',
+        type: 'nominal',
+        title: null,
+        sort: { field: 'order', op: 'min' },
+        header: { labelAngle: 0, labelAlign: 'left', labelAnchor: 'start', labelOrient: 'top', labelFontSize: 9, labelColor: COLOURS.ink },
+      },
+    },
     spec: {
       width: width - 70,
-      height,
+      height: panels > 1 ? 110 : 170,
       mark: { type: 'line', point: { size: 14, filled: true }, color: COLOURS.accent, strokeWidth: 1.5 },
       encoding: {
-        x: { field: 'x', type: 'quantitative', title: xTitle(config, model), scale: { zero: false }, axis: countAxis ? { tickMinStep: 1, format: 'd' } : {} },
+        x: { field: 'x', type: 'quantitative', title, scale: { zero: false }, axis: countAxis ? { tickMinStep: 1, format: 'd' } : {} },
         y: { field: 'value', type: 'quantitative', title: null },
       },
     },
@@ -77,8 +82,27 @@ export async function chartSvg(config: BlockConfig, block: StudyBlockResult, wid
       axis: { labelFontSize: 8, titleFontSize: 8, labelColor: COLOURS.muted, titleColor: COLOURS.muted, gridColor: '#e6e8ee', domainColor: COLOURS.rule, tickColor: COLOURS.rule, titleFontWeight: 'normal' },
     },
   };
-  const view = new vega.View(vega.parse(compile(spec).spec), { renderer: 'none' });
+  const runtime = vega.parse(compile(spec).spec);
+  runtimes.set(key, runtime);
+  return runtime;
+}
+
+/** SVG of the block's chart, or null when it has no rows. Width in PDF points. */
+export async function chartSvg(config: BlockConfig, block: StudyBlockResult, width = 440): Promise<string | null> {
+  const rows = block.chart;
+  if (!rows || rows.length === 0) return null;
+  const model = block.resolvedSpec?.model ?? config.spec.model;
+  const measures = [...new Set(rows.map((r) => r.measure))];
+  const panels = new Map(measures.map((m) => [m, panelFor(m, model, config, rows.filter((r) => r.measure === m && r.value !== null).map((r) => r.value as number))]));
+  const data = rows.map((r) => {
+    const p = panels.get(r.measure) as Panel;
+    return { x: r.x, panel: p.title, order: measures.indexOf(r.measure), value: r.value === null ? null : r.value * p.scale };
+  });
+  // Server counts and other whole numbers get whole-number ticks.
+  const countAxis = MODEL_CATALOG.find((e) => e.model === model)?.inputs.find((f) => f.name === config.chart?.parameter)?.kind === 'count';
+  const view = new vega.View(runtimeFor(measures.length, xTitle(config, model), countAxis, width), { renderer: 'none' });
   try {
+    view.data('rows', data);
     return await view.toSVG();
   } finally {
     view.finalize();

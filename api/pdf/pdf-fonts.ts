@@ -35,19 +35,21 @@ const FILES: Record<string, Files> = {
   Sans: fontsource('inter', 'latin', 400, 600),
   SansExt: fontsource('inter', 'latin-ext', 400, 600),
   SansGreek: fontsource('inter', 'greek', 400, 600),
-  Roboto: ROBOTO,
 };
 
 /** The family that starts a chain: "Serif" for document text, "Sans" for small print. */
 export type BaseFamily = 'Serif' | 'Sans';
-const CHAINS: Record<BaseFamily, string[]> = { Serif: ['Serif', 'SerifExt', 'Roboto'], Sans: ['Sans', 'SansExt', 'SansGreek', 'Roboto'] };
+/** Each chain ends, implicitly, in Roboto (see below), which covers every character we print. */
+const CHAINS: Record<BaseFamily, string[]> = { Serif: ['Serif', 'SerifExt'], Sans: ['Sans', 'SansExt', 'SansGreek'] };
 
 /**
- * Font of chart text (SVG text cannot be split into runs, so one face that covers all). pdfmake
- * hands SVG fonts to pdfkit by file name, bypassing its in-memory files, so this family is named
- * by real path and the local access policy admits exactly these files.
+ * Roboto is the last fallback and the font of chart text (SVG text cannot be split into runs, so
+ * one face that covers all). pdfmake hands SVG fonts to pdfkit by file name, bypassing its
+ * in-memory files, so this family is named by real path and the local access policy admits
+ * exactly these files. Text runs must use the same names: pdfkit caches an opened face under the
+ * name it was asked for, and a face first opened another way is re-read for every chart label.
  */
-export const CHART_FONT = 'Chart';
+export const CHART_FONT = 'Roboto';
 const CHART_PATHS = new Set(Object.values(ROBOTO));
 /** The local access policy of rendering: only the chart font files. */
 export const mayReadLocalFile = (path: string): boolean => CHART_PATHS.has(path);
@@ -94,7 +96,7 @@ function load(): Record<string, Files> {
     }
     out[family] = names;
   }
-  out[CHART_FONT] = { ...ROBOTO };
+  out.Roboto = { ...ROBOTO };
   dictionary = out;
   return out;
 }
@@ -111,7 +113,7 @@ function familyFor(cp: number, base: BaseFamily): string {
     const chain = CHAINS[base];
     const faces = load();
     // Whitespace and controls stay in the base font so runs do not split on every space.
-    family = cp <= 0x20 ? chain[0] : (chain.find((f) => parsed.get(faces[f].normal)?.hasGlyphForCodePoint(cp)) ?? chain[chain.length - 1]);
+    family = cp <= 0x20 ? chain[0] : (chain.find((f) => parsed.get(faces[f].normal)?.hasGlyphForCodePoint(cp)) ?? 'Roboto');
     familyCache.set(key, family);
   }
   return family;

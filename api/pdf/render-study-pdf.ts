@@ -16,6 +16,7 @@ import { chartSvg } from './chart-svg';
 import { coverPage } from './cover-page';
 import { children, type DocNode } from './doc-node';
 import { sans } from './inline-text';
+import { keepWithNext } from './keep-with-next';
 import { mapNode, parseBlockConfig } from './node-mapping';
 import { mayReadLocalFile, pdfFonts } from './pdf-fonts';
 import { COLOURS, STYLES } from './pdf-theme';
@@ -47,7 +48,8 @@ export async function renderStudyPdf(snapshot: RevisionSnapshot, signOff: SignOf
   const document = snapshot.document as DocNode;
   const nodes = modelBlockNodes(document);
   const charts = await renderCharts(nodes, snapshot);
-  const body = mapNode(document, { blocks: snapshot.blocks, charts });
+  // A heading never sits alone at the foot of a page.
+  const body = keepWithNext(mapNode(document, { blocks: snapshot.blocks, charts }));
   const used = nodes
     .map((n) => ({ title: parseBlockConfig(n.attrs?.config)?.title || 'Untitled model block', result: snapshot.blocks[String(n.attrs?.blockId ?? '')] }))
     .filter((b) => b.result !== undefined);
@@ -82,8 +84,6 @@ export async function renderStudyPdf(snapshot: RevisionSnapshot, signOff: SignOf
       page === 1 ? null : { columns: [sans(snapshot.engagement.name, { fontSize: 7.5, color: COLOURS.muted }), sans(`Revision ${snapshot.number}${signOff ? '' : ' · preview'}`, { fontSize: 7.5, color: COLOURS.muted, alignment: 'right' })], margin: [62, 30, 62, 0] },
     footer: (page: number, pages: number) =>
       page === 1 ? null : { columns: [sans(title, { fontSize: 7.5, color: COLOURS.muted }), sans(`Page ${page} of ${pages}`, { fontSize: 7.5, color: COLOURS.muted, alignment: 'right' })], margin: [62, 20, 62, 0] },
-    // A heading never sits alone at the foot of a page.
-    pageBreakBefore: (node, query) => Boolean((node as { headlineLevel?: number }).headlineLevel) && query.getFollowingNodesOnPage().length === 0,
     content,
   };
 
