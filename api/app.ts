@@ -13,13 +13,16 @@ import { auditRouter } from './routes/audit/audit.router';
 import { authRouter } from './routes/auth/auth.router';
 import { computeRouter } from './routes/compute/compute.router';
 import { datasetsRouter } from './routes/datasets/datasets.router';
+import { deliverablesRouter } from './routes/deliverables/deliverables.router';
 import { engagementsRouter } from './routes/engagements/engagements.router';
 import { healthRouter } from './routes/health/health.router';
 import { invitationsRouter } from './routes/invitations/invitations.router';
 import { mailboxRouter } from './routes/mailbox/mailbox.router';
+import { revisionsRouter } from './routes/revisions/revisions.router';
 import { studiesRouter } from './routes/studies/studies.router';
 import { simulationsRouter } from './routes/simulations/simulations.router';
 import { usersRouter } from './routes/users/users.router';
+import { verifyRouter } from './routes/verify/verify.router';
 
 export const SESSION_COOKIE = 'sojourn.sid';
 
@@ -85,6 +88,9 @@ export function createApp(ctx: AppContext): Express {
   api.use(auditRouter(ctx));
   api.use(mailboxRouter(ctx));
   api.use(simulationsRouter());
+  api.use(revisionsRouter(ctx));
+  api.use(deliverablesRouter(ctx));
+  api.use(verifyRouter(ctx));
   api.use((req) => {
     throw new HttpError(404, 'not_found', `No API route ${req.method} ${req.path}.`);
   });

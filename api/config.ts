@@ -1,3 +1,5 @@
+import { resolve } from 'node:path';
+
 /**
  * Every setting comes from the environment. In production nothing is started for you: point
  * DATABASE_URL, S3_*, SMTP_URL at real services. scripts/start.mjs fills these in for the demo.
@@ -10,7 +12,25 @@ export interface Config {
   /** Send cookies only over HTTPS (on when PUBLIC_URL is https). */
   cookieSecure: boolean;
   trustProxy: boolean;
-  s3: { endpoint?: string; region: string; bucket: string; accessKeyId?: string; secretAccessKey?: string; forcePathStyle: boolean };
+  s3: {
+    endpoint?: string;
+    region: string;
+    bucket: string;
+    accessKeyId?: string;
+    secretAccessKey?: string;
+    forcePathStyle: boolean;
+    /** Address browsers use for presigned links when it differs from `endpoint` (S3_PUBLIC_ENDPOINT). */
+    publicEndpoint?: string;
+  };
+  /**
+   * The firm certificate that signs released PDFs. Production: SIGNING_P12_PATH or
+   * SIGNING_P12_BASE64 with SIGNING_P12_PASSPHRASE. Without them (demo and tests) a self-signed
+   * certificate is made on first use and kept in `demoDir` (the private data folder); in
+   * production (NODE_ENV=production) `demoDir` is null and releases fail until one is configured.
+   */
+  signing: { p12Path: string | null; p12Base64: string | null; passphrase: string; demoDir: string | null; location: string };
+  /** Lifetime of a presigned deliverable link, in seconds. */
+  deliverableLinkSeconds: number;
   smtpUrl: string;
   mailFrom: string;
   /** HTTP address of the local SMTP fake's mailbox; null in production (the mailbox page is then off). */
@@ -45,7 +65,19 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       accessKeyId: env.S3_ACCESS_KEY_ID || undefined,
       secretAccessKey: env.S3_SECRET_ACCESS_KEY || undefined,
       forcePathStyle: env.S3_FORCE_PATH_STYLE !== '0',
+      publicEndpoint: env.S3_PUBLIC_ENDPOINT || undefined,
     },
+    signing: {
+      p12Path: env.SIGNING_P12_PATH || null,
+      p12Base64: env.SIGNING_P12_BASE64 || null,
+      passphrase: env.SIGNING_P12_PASSPHRASE ?? '',
+      demoDir:
+        env.SIGNING_P12_PATH || env.SIGNING_P12_BASE64 || env.NODE_ENV === 'production'
+          ? null
+          : resolve(env.SOJOURN_DATA_DIR ?? env.TEST_DATA_DIR ?? '.data', 'signing'),
+      location: env.SIGNING_LOCATION ?? 'Sojourn',
+    },
+    deliverableLinkSeconds: int(env.DELIVERABLE_LINK_SECONDS, 60),
     smtpUrl: env.SMTP_URL as string,
     mailFrom: env.MAIL_FROM ?? 'Sojourn <no-reply@sojourn.test>',
     mailFakeUrl: env.MAIL_FAKE_URL || null,

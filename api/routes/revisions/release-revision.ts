@@ -1,0 +1,91 @@
+import { createHash } from 'node:crypto';
+import { PutObjectCommand } from '@aws-sdk/client-s3';
+import { and, eq, sql } from 'drizzle-orm';
+import type { SessionUser } from '../../../shared/schemas/auth';
+import type { SignOff } from '../../../shared/schemas/revisions';
+import type { AppContext } from '../../context';
+import { releases, revisions, studies, users } from '../../db/schema/index';
+import { HttpError } from '../../http-error';
+import { renderStudyPdf } from '../../pdf/render-study-pdf';
+import { releaseReason, signPdf } from '../../signing/sign-pdf';
+import { recordAudit } from '../audit/audit.service';
+import { firmCertificate } from './firm-signer';
+import { claimRelease, failRelease } from './release-claim';
+import { assertNotSubmitter, type RevisionContext } from './revision-access';
+import { revisionSha256 } from './revision-hash';
+import { membersWithRoles, notifyRevision, submitterOf } from './revision-mails';
+import { illegalTransition } from './revision-state';
+
+/** Where a revision's PDF lives: one key per engagement, study and revision number. */
+export const deliverableKey = (rc: RevisionContext): string => `engagements/${rc.engagement.id}/studies/${rc.study.id}/revisions/${rc.revision.number}.pdf`;
+
+async function signedPdf(ctx: AppContext, rc: RevisionContext, releasedAt: Date): Promise<Buffer> {
+  const { revision } = rc;
+  const [approver] = await ctx.db.select({ name: users.name, email: users.email }).from(users).where(eq(users.id, revision.decidedBy ?? 0));
+  const signOff: SignOff = {
+    approverName: approver?.name ?? 'former member',
+    approverEmail: approver?.email ?? '',
+    approvedAt: (revision.decidedAt ?? releasedAt).toISOString(),
+    sha256: revision.sha256,
+    releasedAt: releasedAt.toISOString(),
+  };
+  const cert = await firmCertificate(ctx.config.signing);
+  const pdf = await renderStudyPdf(revision.snapshot, signOff);
+  return signPdf(pdf, cert, { reason: releaseReason(revision.number, revision.sha256), name: cert.commonName, location: ctx.config.signing.location });
+}
+
+/**
+ * Releases an approved revision: claim (one request wins), render and sign the PDF and PUT it to
+ * object storage, all outside any transaction; then, only after the PUT succeeded, one transaction
+ * marks the release, the revision and the study released. Any failure before that records the
+ * release as failed with its reason and leaves the revision approved, so it can be retried.
+ */
+export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: SessionUser, ip?: string): Promise<void> {
+  const { revision } = rc;
+  assertNotSubmitter(by, revision, 'release');
+  if (revision.status !== 'approved') throw illegalTransition(revision.number, revision.status, 'release');
+  if (revisionSha256(revision.snapshot) !== revision.sha256) {
+    throw new HttpError(409, 'integrity_failed', `The stored content of revision ${revision.number} no longer matches its SHA-256; it cannot be released.`);
+  }
+  const attempt = await claimRelease(ctx, revision.id);
+  const releasedAt = new Date();
+  const key = deliverableKey(rc);
+  let file: Buffer;
+  try {
+    file = await signedPdf(ctx, rc, releasedAt);
+    await ctx.storage.client.send(
+      new PutObjectCommand({ Bucket: ctx.storage.bucket, Key: key, Body: file, ContentType: 'application/pdf', ContentLength: file.length }),
+      { abortSignal: AbortSignal.timeout(30_000) },
+    );
+  } catch (err) {
+    const reason = `${(err as Error).name === 'Error' ? '' : `${(err as Error).name}: `}${(err as Error).message || 'unknown error'}`;
+    await failRelease(ctx, revision.id, attempt, reason);
+    await recordAudit(ctx.db, { action: 'release_failed', actor: by, engagementId: rc.engagement.id, subject: `${rc.study.title}, revision ${revision.number}`, detail: { revisionId: revision.id, attempt, reason }, ip });
+    throw new HttpError(503, 'release_failed', `The signed PDF could not be stored (${reason}). The release was recorded as failed; revision ${revision.number} stays approved and can be released again.`);
+  }
+  const fileSha256 = createHash('sha256').update(file).digest('hex');
+  await ctx.db.transaction(async (tx) => {
+    const [rel] = await tx
+      .update(releases)
+      .set({ status: 'released', s3Key: key, fileSha256, fileSize: file.length, releasedAt, releasedBy: by.id, lastError: null, leaseUntil: null, updatedAt: new Date() })
+      .where(and(eq(releases.revisionId, revision.id), eq(releases.status, 'releasing'), eq(releases.attempts, attempt)));
+    const [rev] = await tx
+      .update(revisions)
+      .set({ status: 'released', releasedAt, version: sql`${revisions.version} + 1` })
+      .where(and(eq(revisions.id, revision.id), eq(revisions.status, 'approved')));
+    // A takeover of an expired lease means another attempt owns the release now: write nothing.
+    if (rel.affectedRows !== 1 || rev.affectedRows !== 1) throw new HttpError(409, 'conflict', 'Another release attempt took over this revision; reload to see its outcome.');
+    await tx.update(studies).set({ status: 'released' }).where(eq(studies.id, rc.study.id));
+  });
+  await recordAudit(ctx.db, {
+    action: 'revision_released',
+    actor: by,
+    engagementId: rc.engagement.id,
+    subject: `${rc.study.title}, revision ${revision.number}`,
+    detail: { revisionId: revision.id, number: revision.number, sha256: revision.sha256, fileSha256, s3Key: key, attempt },
+    ip,
+  });
+  const fresh = { ...rc, revision: { ...revision, status: 'released' as const, releasedAt } };
+  const to = [...(await membersWithRoles(ctx, rc.engagement.id, ['client'])), ...(await submitterOf(ctx, fresh))];
+  await notifyRevision(ctx, 'released', fresh, to, { actorName: by.name });
+}
