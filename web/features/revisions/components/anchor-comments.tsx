@@ -34,7 +34,10 @@ export function AnchorComments({ anchorLabel, threads, actions, onStart }: Ancho
         aria-label={`${summary} on ${anchorLabel}`}
         onClick={() => setExpanded((e) => !e)}
       >
-        <span aria-hidden>💬</span> {summary}
+        <svg aria-hidden viewBox="0 0 16 16" className="size-3.5 fill-none stroke-current stroke-[1.5]">
+          <path d="M2.5 3.5h11v7h-6l-3 2.5v-2.5h-2z" strokeLinejoin="round" />
+        </svg>
+        {summary}
       </Button>
       {expanded && (
         <div id={panelId} role="region" aria-label={`Comments on ${anchorLabel}`} className="mt-2 flex flex-col gap-3 rounded-md border border-accent/30 bg-accent-tint/40 p-3">

@@ -1,4 +1,5 @@
 import type { RevisionSnapshot } from '#shared/schemas/revisions';
+import { modelLabel } from '../../../editor/block-results';
 import { ReaderDocument, type DocNode } from '../../study-reader/components/reader-document';
 import { anchorKey, type CommentThread } from '../api/group-threads';
 import { AnchorComments } from './anchor-comments';
@@ -20,8 +21,9 @@ function anchorOf(node: DocNode): { type: 'section' | 'block'; id: string; label
     return { type: 'section', id: attrs.sectionId, label: `section ${plain(node).trim() || 'without a title'}` };
   }
   if (node.type === 'modelBlock' && typeof attrs.blockId === 'string' && attrs.blockId) {
-    const title = (attrs.config as { title?: string } | null)?.title;
-    return { type: 'block', id: attrs.blockId, label: `model block ${title || attrs.blockId}` };
+    const config = attrs.config as { title?: string; spec?: { model?: string } } | null;
+    const name = config?.title || (config?.spec?.model ? modelLabel(config.spec.model) : 'without a title');
+    return { type: 'block', id: attrs.blockId, label: `model block ${name}` };
   }
   return null;
 }
@@ -33,11 +35,12 @@ function anchorOf(node: DocNode): { type: 'section' | 'block'; id: string; label
 export function FrozenDocument({ snapshot, threads, actions }: FrozenDocumentProps) {
   const nodes = ((snapshot.document as DocNode).content ?? []) as DocNode[];
   return (
-    <div className="study-text reader-text">
+    // Each node is its own reader text, so the spacing the reader gives between siblings is set here.
+    <div>
       {nodes.map((node, i) => {
         const anchor = actions ? anchorOf(node) : null;
         return (
-          <div key={i} data-anchor={anchor ? `${anchor.type}:${anchor.id}` : undefined}>
+          <div key={i} data-anchor={anchor ? `${anchor.type}:${anchor.id}` : undefined} className={i === 0 ? '' : node.type === 'heading' ? 'mt-10' : 'mt-4'}>
             <ReaderDocument doc={{ type: 'doc', content: [node] }} blocks={snapshot.blocks} />
             {anchor && actions && (
               <AnchorComments

@@ -9,8 +9,10 @@ import { RevisionTable } from './revision-table';
 /** Route /reviews — a partner's waiting work: revisions to decide on, sign-offs to release. */
 export function ReviewQueueScreen() {
   const queue = useQuery(reviewQueueQuery());
-  const toDecide = queue.data?.filter((r) => r.status === 'in_review') ?? [];
-  const toRelease = queue.data?.filter((r) => r.status === 'approved') ?? [];
+  // Oldest first: whoever has waited longest is read first.
+  const waiting = [...(queue.data ?? [])].sort((a, b) => a.submittedAt.localeCompare(b.submittedAt));
+  const toDecide = waiting.filter((r) => r.status === 'in_review');
+  const toRelease = waiting.filter((r) => r.status === 'approved');
 
   return (
     <>

@@ -35,7 +35,7 @@ export function SectionChanges({ section }: { section: SectionChange }) {
             }
             if (part.kind === 'removed') {
               return (
-                <del key={i} className="bg-danger-tint text-danger decoration-2">
+                <del key={i} className="mr-0.5 bg-danger-tint text-danger decoration-2">
                   <span className="sr-only">[removed: </span>
                   {part.text}
                   <span className="sr-only">]</span>

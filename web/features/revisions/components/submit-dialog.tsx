@@ -27,7 +27,10 @@ export function SubmitDialog({ number, working, error, submitted, onConfirm, onC
   }, []);
 
   return (
-    <dialog ref={ref} aria-labelledby={titleId} onClose={onClose} className="m-auto w-[min(34rem,calc(100vw-2rem))] rounded-lg border border-rule bg-sheet p-0 text-ink shadow-xl backdrop:bg-ink/40">
+    <dialog ref={ref} aria-labelledby={titleId} onClose={() => {
+        // React's development double-run closes and reopens the dialog; only a close that sticks counts.
+        if (!ref.current?.open) onClose();
+      }} className="m-auto w-[min(34rem,calc(100vw-2rem))] rounded-lg border border-rule bg-sheet p-0 text-ink shadow-xl backdrop:bg-ink/40">
       <div className="flex flex-col gap-4 px-6 py-5 text-sm">
         <h2 id={titleId} className="text-xl font-bold">
           {submitted ? `Revision ${submitted.number} submitted` : `Submit as revision ${number}?`}
