@@ -9,11 +9,13 @@ import { revisionKeys } from './revision-keys';
  * saw, so a save by someone else in between answers 409 instead of submitting unseen text.
  */
 export function useSubmitRevision(studyId: number) {
-  const refresh = useRefreshAfter();
+  const qc = useQueryClient();
   return useMutation({
     mutationFn: async (studyVersion: number | undefined) =>
       (await api(`/api/studies/${studyId}/revisions`, { method: 'POST', body: { studyVersion }, schema: revisionRefBody })).revision,
-    onSuccess: refresh,
+    // Not the open study itself: the editor owns it and reloads it (now read-only) once the
+    // author has read the outcome; refetching it here would unmount the outcome dialog.
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: revisionKeys.all }), qc.invalidateQueries({ queryKey: ['engagements'] })]),
   });
 }
 
