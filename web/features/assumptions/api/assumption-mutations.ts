@@ -25,11 +25,11 @@ export function useUpdateAssumption(engagementId: number) {
   return useMutation({
     mutationFn: async ({ id, patch }: { id: number; patch: UpdateAssumption }) =>
       api(`/api/assumptions/${id}`, { method: 'PATCH', body: patch, schema: updatedBody }),
-    onSuccess: async ({ moved }) => {
-      const work = [qc.invalidateQueries({ queryKey: engagementFamily(engagementId) })];
-      // The editor keeps a study's results until told otherwise: tell it for each study that moved.
-      if (moved.length > 0) work.push(qc.invalidateQueries({ queryKey: ['studies'] }));
-      await Promise.all(work);
+    onSuccess: async () => {
+      // The editor keeps a study's results for as long as it is open and would show its cached
+      // copy first on the next visit: drop the cached studies so they load with the new numbers.
+      qc.removeQueries({ queryKey: ['studies'] });
+      await qc.invalidateQueries({ queryKey: engagementFamily(engagementId) });
     },
     // Stale: fetch the version someone else saved so the form can offer it.
     onError: (err) => (err instanceof ApiError && err.status === 409 ? qc.invalidateQueries({ queryKey: engagementFamily(engagementId) }) : undefined),

@@ -14,16 +14,30 @@ interface FormDialogProps {
 export function FormDialog({ title, description, onClose, children }: FormDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
+  const latestOnClose = useRef(onClose);
+  useEffect(() => {
+    latestOnClose.current = onClose;
+  });
   useEffect(() => {
     const dialog = ref.current;
-    if (dialog && !dialog.open) dialog.showModal();
-    return () => dialog?.close();
+    if (!dialog) return;
+    // Only a close the person asked for (Escape) reports back. The close in the cleanup
+    // (unmount, or StrictMode's rehearsal) must not: its event arrives late, after the dialog
+    // has been opened again, so a dialog that is open by then ignores it.
+    const reportClose = () => {
+      if (!dialog.open) latestOnClose.current();
+    };
+    dialog.addEventListener('close', reportClose);
+    if (!dialog.open) dialog.showModal();
+    return () => {
+      dialog.removeEventListener('close', reportClose);
+      if (dialog.open) dialog.close();
+    };
   }, []);
   return (
     <dialog
       ref={ref}
       aria-labelledby={titleId}
-      onClose={onClose}
       className="m-auto w-[min(40rem,calc(100vw-2rem))] rounded-lg border border-rule bg-sheet p-0 text-ink shadow-xl backdrop:bg-ink/40"
     >
       <div className="flex flex-col gap-4 px-6 py-5">
