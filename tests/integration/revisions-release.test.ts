@@ -13,7 +13,7 @@ let c: ReviewCast;
 let studyId = 0;
 let revisionId = 0;
 let results: Record<string, number> = {};
-let pdf = Buffer.alloc(0);
+let pdf: Buffer = Buffer.alloc(0);
 let revisionSha = '';
 
 const sha = (b: Buffer): string => createHash('sha256').update(b).digest('hex');
