@@ -15,6 +15,7 @@ interface DeliverableTableProps {
 }
 
 /** Released, signed reports: which study and revision, when released, who signed off; download each. */
+// Numeric headers force right alignment: the shared header's text-left outranks the .num rule.
 export function DeliverableTable({ deliverables, caption, showEngagement = false }: DeliverableTableProps) {
   const download = useDownloadPdf();
   const sorted = [...deliverables].sort((a, b) => b.releasedAt.localeCompare(a.releasedAt));
@@ -29,10 +30,10 @@ export function DeliverableTable({ deliverables, caption, showEngagement = false
         <thead>
           <tr>
             <Th>Study</Th>
-            <Th num>Revision</Th>
+            <Th num className="text-right!">Revision</Th>
             <Th>Released</Th>
             <Th>Signed off by</Th>
-            <Th num>Size, KiB</Th>
+            <Th num className="text-right!">Size, KiB</Th>
             <Th>
               <span className="sr-only">Download</span>
             </Th>

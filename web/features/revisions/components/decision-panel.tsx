@@ -21,7 +21,9 @@ export function DecisionPanel({ revision }: { revision: RevisionDetail }) {
   const send = (decision: 'approve' | 'request-changes') => {
     const values = form.validate(decisionSchema, { decision, reason });
     if (!values) return;
-    decide.mutate(values, { onError: form.fromError });
+    // The panel goes away with the decision; focus follows to what replaced it (release panel or notice).
+    const target = decision === 'approve' ? 'revision-release' : 'revision-notices';
+    decide.mutate(values, { onError: form.fromError, onSuccess: () => window.setTimeout(() => document.getElementById(target)?.focus(), 0) });
   };
 
   return (

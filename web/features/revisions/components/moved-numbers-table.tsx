@@ -8,6 +8,7 @@ const signed = new Intl.NumberFormat('en-GB', { maximumSignificantDigits: 6, sig
 const show = (n: number | null, f: Intl.NumberFormat = number) => (n === null ? '—' : f.format(n));
 
 /** Every model output that moved between the two revisions: block, measure, before, after, change. */
+// Numeric headers force right alignment: the shared header's text-left outranks the .num rule.
 export function MovedNumbersTable({ rows, caption }: { rows: MovedNumber[]; caption: string }) {
   return (
     <Table caption={caption}>
@@ -15,10 +16,10 @@ export function MovedNumbersTable({ rows, caption }: { rows: MovedNumber[]; capt
         <tr>
           <Th>Model block</Th>
           <Th>Measure</Th>
-          <Th num>Before</Th>
-          <Th num>After</Th>
-          <Th num>Change</Th>
-          <Th num>Relative</Th>
+          <Th num className="text-right!">Before</Th>
+          <Th num className="text-right!">After</Th>
+          <Th num className="text-right!">Change</Th>
+          <Th num className="text-right!">Relative</Th>
         </tr>
       </thead>
       <tbody>

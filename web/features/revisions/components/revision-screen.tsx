@@ -53,7 +53,9 @@ function RevisionView({ id }: { id: number }) {
       </nav>
       <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_20rem]">
         <div className="flex min-w-0 flex-col gap-4">
-          <RevisionNotices revision={r} />
+          <div id="revision-notices" tabIndex={-1} className="flex flex-col gap-4 focus:outline-none">
+            <RevisionNotices revision={r} />
+          </div>
           <article aria-label={`Revision ${r.number} of ${r.studyTitle}`} className="rounded-sm border border-rule bg-sheet px-8 py-12 shadow-sm sm:px-14">
             <header className="mb-10 border-b border-rule pb-8">
               <p className="font-sans text-xs font-semibold tracking-widest text-ink-faint uppercase">{s.engagement.name}</p>
@@ -73,7 +75,11 @@ function RevisionView({ id }: { id: number }) {
         </div>
         <aside aria-label="Review" className="flex flex-col gap-6 xl:sticky xl:top-4 xl:h-fit">
           {r.canDecide && r.status === 'in_review' && <DecisionPanel revision={r} />}
-          {(r.status === 'approved' || r.status === 'released') && <ReleasePanel revision={r} />}
+          {(r.status === 'approved' || r.status === 'released') && (
+            <div id="revision-release" tabIndex={-1} className="focus:outline-none">
+              <ReleasePanel revision={r} />
+            </div>
+          )}
           {user.role !== 'client' && <GeneralComments threads={threads.get('general') ?? []} actions={actions} />}
           <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 rounded-lg border border-rule bg-sheet px-4 py-3 text-xs text-ink-soft">
             <dt>Engine</dt>

@@ -16,6 +16,7 @@ interface RevisionTableProps {
 }
 
 /** Revisions with who submitted and who decided, and the reason when changes were requested. */
+// Numeric headers force right alignment: the shared header's text-left outranks the .num rule.
 export function RevisionTable({ revisions, caption, showStudy = false, picked, onPick }: RevisionTableProps) {
   return (
     <Table caption={caption}>
@@ -23,7 +24,7 @@ export function RevisionTable({ revisions, caption, showStudy = false, picked, o
         <tr>
           {onPick && <Th className="w-12">Compare</Th>}
           {showStudy && <Th>Study</Th>}
-          <Th num>Revision</Th>
+          <Th num className="text-right!">Revision</Th>
           <Th>Status</Th>
           <Th>Submitted</Th>
           <Th>Decision</Th>
