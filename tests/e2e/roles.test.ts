@@ -52,7 +52,7 @@ describe('what each role sees after signing in', () => {
   it('shows a partner their engagements and no administration links', async () => {
     await signIn(page, 'partner');
     await engagementCards().first().waitFor();
-    expect(await navLinks()).toEqual(['Engagements']);
+    expect(await navLinks()).toEqual(['Engagements', 'Waiting for review', 'Deliverables']);
     await screenshot(page, 'partner-engagements');
   });
 
@@ -69,7 +69,7 @@ describe('what each role sees after signing in', () => {
     await signIn(page, 'client');
     await engagementCards().first().waitFor();
     expect(await engagementCards().count()).toBe(1);
-    expect(await navLinks()).toEqual(['Engagements']);
+    expect(await navLinks()).toEqual(['Engagements', 'Deliverables', 'Verify a copy']);
     await screenshot(page, 'client-engagements');
 
     await engagementCards().first().getByRole('link').click();

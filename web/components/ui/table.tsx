@@ -30,7 +30,7 @@ export function Th({ num, className = '', ...rest }: CellProps & ThHTMLAttribute
   return (
     <th
       scope="col"
-      className={`border-b border-rule-strong px-4 py-2.5 text-left text-xs font-semibold tracking-wide text-ink-soft uppercase ${num ? 'num' : ''} ${className}`}
+      className={`border-b border-rule-strong px-4 py-2.5 text-xs font-semibold tracking-wide text-ink-soft uppercase ${num ? 'num text-right' : 'text-left'} ${className}`}
       {...rest}
     />
   );
