@@ -11,7 +11,8 @@ import { fitStream } from './fit-stream';
 
 /** A fitting job whose heartbeat is older than this is presumed dead (its process stopped). */
 export const STALE_JOB_MS = 60_000;
-const PROGRESS_EVERY_MS = 400;
+// Progress is a UI nicety and a heartbeat (stale after a minute): one UPDATE a second is plenty.
+const PROGRESS_EVERY_MS = 1000;
 
 /** Thrown inside a run whose claim was taken over (remapped, reclaimed): it stops quietly. */
 class LostClaim extends Error {}

@@ -1,48 +1,31 @@
 import type { Readable } from 'node:stream';
-import { parse, CsvError } from 'csv-parse';
+import { StringDecoder } from 'node:string_decoder';
 import { createArrivalAccumulator, createIntervalCountAccumulator, createServiceAccumulator } from '../../../shared/queue/fit/index';
 import { createLocalClock } from '../../../shared/queue/fit/local-clock';
 import { QueueError } from '../../../shared/queue/errors';
-import { DATASET_MAX_LINE, DELIMITER_CHARS, type DatasetFit, type DatasetMapping } from '../../../shared/schemas/datasets';
+import { DELIMITER_CHARS, type DatasetFit, type DatasetMapping } from '../../../shared/schemas/datasets';
 import { DatasetInputError } from './dataset-problem';
 import { fitSuggestions } from './fit-suggestions';
+import { createRecordSplitter } from './record-splitter';
 import { createRowReader } from './row-reader';
 
 /** Per-interval rows kept in a stored fit; beyond this only the profile and the peak are kept. */
 export const STORED_INTERVALS_MAX = 5000;
 const MAX_CHANNELS = 1000;
+const DECODE_PIECE = 32 * 1024;
 
 export interface FitProgress {
   bytes: number;
   rows: number;
 }
 
-/** csv-parse's own errors, rewritten as located messages for the user. */
-function fromCsvError(err: CsvError): DatasetInputError {
-  const row = (err as CsvError & { lines?: number }).lines ?? null;
-  const where = row ? `Row ${row}: ` : '';
-  switch (err.code) {
-    case 'CSV_RECORD_INCONSISTENT_FIELDS_LENGTH':
-      return new DatasetInputError(`${where}${err.message.replace(/^Invalid Record Length: /, '')}. Check the delimiter and any quotes in that row.`, row);
-    case 'CSV_MAX_RECORD_SIZE':
-      return new DatasetInputError(`${where}a line is longer than ${DATASET_MAX_LINE.toLocaleString('en')} characters; this does not look like a table of observations.`, row);
-    default:
-      return new DatasetInputError(`${where}${err.message}`, row);
-  }
-}
-
 /**
- * Streams a CSV/TSV through csv-parse into the engine's accumulators, so memory stays flat
- * whatever the file size (the service buffer is bounded by the engine). `onProgress` is awaited
- * every few thousand rows: the job uses it to report and to learn that it should stop.
+ * Streams a CSV/TSV into the engine's accumulators, so memory stays flat whatever the file size
+ * (the service buffer is bounded by the engine). Chunks are split into records synchronously
+ * (createRecordSplitter), with no per-row promise: `onProgress` is awaited once per chunk, and
+ * the job uses it to report (throttled there) and to learn that it should stop.
  */
 export async function fitStream(source: Readable, mapping: DatasetMapping, datasetName: string, onProgress?: (p: FitProgress) => Promise<void> | void): Promise<DatasetFit> {
-  let bytes = 0;
-  source.on('data', (chunk: Buffer) => (bytes += chunk.length));
-  const parser = source.pipe(
-    parse({ delimiter: DELIMITER_CHARS[mapping.delimiter], bom: true, skip_empty_lines: true, max_record_size: DATASET_MAX_LINE, relax_quotes: true }),
-  );
-  source.on('error', (err) => parser.destroy(err));
   const toLocal = createLocalClock(mapping.timeZone);
   const options = { intervalMinutes: mapping.intervalMinutes, timeZone: mapping.timeZone };
   const arrivals = mapping.kind === 'event_log' ? createArrivalAccumulator(options) : null;
@@ -50,40 +33,53 @@ export async function fitStream(source: Readable, mapping: DatasetMapping, datas
   const service = createServiceAccumulator();
   const channels = new Map<string, number>();
   let read: ReturnType<typeof createRowReader> | null = null;
-  let rows = 0, handlingSum = 0, handlingWeight = 0, handlingRows = 0;
-  try {
-    for await (const record of parser as AsyncIterable<string[]>) {
-      if (!read) {
-        read = createRowReader(record, mapping, toLocal);
-        continue;
-      }
-      rows++;
-      const row = read(record, rows + 1);
-      if (arrivals) arrivals.add(row.timeMs);
-      else {
-        try {
-          counts!.add(row.timeMs, row.count);
-        } catch (err) {
-          if (err instanceof QueueError) throw new DatasetInputError(`Row ${rows + 1}, column "${mapping.timeColumn}": does not start a ${mapping.intervalMinutes}-minute interval in ${mapping.timeZone}; choose the interval length of the file.`, rows + 1, mapping.timeColumn);
-          throw err;
-        }
-      }
-      if (row.serviceSeconds !== null) service.add(row.serviceSeconds);
-      if (row.handlingSeconds !== null) {
-        handlingSum += row.handlingSeconds * row.count;
-        handlingWeight += row.count;
-        handlingRows++;
-      }
-      if (row.channel !== null) {
-        const key = channels.has(row.channel) || channels.size < MAX_CHANNELS ? row.channel : 'other';
-        channels.set(key, (channels.get(key) ?? 0) + row.count);
-      }
-      if (onProgress && (rows & 8191) === 0) await onProgress({ bytes, rows });
+  let bytes = 0, rows = 0, handlingSum = 0, handlingWeight = 0, handlingRows = 0;
+
+  const onRecord = (record: string[]) => {
+    if (!read) {
+      read = createRowReader(record, mapping, toLocal);
+      return;
     }
-  } catch (err) {
-    if (err instanceof CsvError) throw fromCsvError(err);
-    throw err;
+    rows++;
+    const row = read(record, rows + 1);
+    if (arrivals) arrivals.add(row.timeMs);
+    else {
+      try {
+        counts!.add(row.timeMs, row.count);
+      } catch (err) {
+        if (err instanceof QueueError) throw new DatasetInputError(`Row ${rows + 1}, column "${mapping.timeColumn}": does not start a ${mapping.intervalMinutes}-minute interval in ${mapping.timeZone}; choose the interval length of the file.`, rows + 1, mapping.timeColumn);
+        throw err;
+      }
+    }
+    if (row.serviceSeconds !== null) service.add(row.serviceSeconds);
+    if (row.handlingSeconds !== null) {
+      handlingSum += row.handlingSeconds * row.count;
+      handlingWeight += row.count;
+      handlingRows++;
+    }
+    if (row.channel !== null) {
+      const key = channels.has(row.channel) || channels.size < MAX_CHANNELS ? row.channel : 'other';
+      channels.set(key, (channels.get(key) ?? 0) + row.count);
+    }
+  };
+
+  const splitter = createRecordSplitter(DELIMITER_CHARS[mapping.delimiter], onRecord);
+  // A multi-byte character may be cut between chunks: the decoder keeps its first bytes.
+  const decoder = new StringDecoder('utf8');
+  for await (const chunk of source as AsyncIterable<Buffer | string>) {
+    if (typeof chunk === 'string') {
+      bytes += Buffer.byteLength(chunk);
+      splitter.push(chunk);
+    } else {
+      bytes += chunk.length;
+      // Decoded in small pieces: a string over ~128 kB lands in V8's large-object space, and the
+      // cells sliced from it keep it alive, which made garbage collection cost more than parsing.
+      for (let at = 0; at < chunk.length; at += DECODE_PIECE) splitter.push(decoder.write(chunk.subarray(at, at + DECODE_PIECE)));
+    }
+    if (onProgress) await onProgress({ bytes, rows });
   }
+  splitter.push(decoder.end());
+  splitter.end();
   if (!read) throw new DatasetInputError('The file is empty.');
   if (rows === 0) throw new DatasetInputError('The file has a header but no data rows.', 2);
   const demand = (arrivals ?? counts)!.result();
