@@ -9,6 +9,7 @@ import { idParam, parse } from '../../middleware/parse';
 import { addComment, listComments, readComment, setResolved } from './comments.service';
 import { compareRevisions } from './compare-revisions';
 import { decideRevision } from './decide-revision';
+import { firmCertificate } from './firm-signer';
 import { releaseRevision } from './release-revision';
 import { reviewQueue } from './review-queue';
 import { assertRevisionRole, loadRevisionFor, loadStudyForRevisions, type RevisionAccess } from './revision-access';
@@ -18,6 +19,9 @@ import { submitRevision } from './submit-revision';
 /** Revisions of a study: submit, list, read, decide, release, compare, comment; and the review queue. */
 export function revisionsRouter(ctx: AppContext): Router {
   const r = Router();
+  // Load (in the demo: make, once) the firm certificate at start, so the first release does not
+  // pay for it and a missing production certificate shows up in the log right away.
+  firmCertificate(ctx.config.signing).catch((err: unknown) => console.warn(`[api] signing certificate: ${(err as Error).message}`));
   const revision = (req: Request, access: RevisionAccess, param = req.params.id) => loadRevisionFor(ctx.db, currentUser(req), idParam(param, 'That revision'), access);
 
   r.post('/studies/:id/revisions', async (req, res) => {
