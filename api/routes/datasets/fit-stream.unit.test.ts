@@ -1,6 +1,7 @@
 /** Parsing and fitting generated logs with known rates, through the same stream the fit job uses. */
 import { Readable } from 'node:stream';
 import kstest from '@stdlib/stats-kstest';
+import { parse } from 'csv-parse/sync';
 import { describe, expect, it } from 'vitest';
 import { eventLogLines, type EventLogOptions } from '../../../fakes/demo-event-log';
 import type { DatasetMapping } from '../../../shared/schemas/datasets';
@@ -88,5 +89,19 @@ describe('fitStream on generated event logs', () => {
     expect(fit.demand.totalArrivals).toBe(16 * 10 + 16 * 11 + 16 * 12);
     expect(fit.handling?.meanSeconds).toBe(240);
     expect(fit.service).toBeNull();
+  });
+
+  it('reads bytes cut anywhere, mid-character included, with a BOM, CRLF and quoted cells, as csv-parse does', async () => {
+    const lines = [...eventLogLines({ ...FLAT, days: 1 })].slice(1).map((l, i) => l.trim().replace(/desk$/, ['café', '"Bureau, 2e étage"', '€ desk'][i % 3]));
+    const csv = '\uFEFFarrived_at,service_start,service_end,channel\r\n' + lines.join('\r\n') + '\r\n';
+    const bytes = Buffer.from(csv);
+    const chunks: Buffer[] = [];
+    for (let at = 0, n = 1; at < bytes.length; at += n, n = (n % 7) + 1) chunks.push(bytes.subarray(at, at + n));
+    const fit = await fitStream(Readable.from(chunks), mapping, 'cut.csv');
+    // source: csv-parse (sync API) on the whole text, counting the channel column.
+    const expected = new Map<string, number>();
+    for (const r of (parse(csv, { bom: true, skip_empty_lines: true }) as string[][]).slice(1)) expected.set(r[3], (expected.get(r[3]) ?? 0) + 1);
+    expect(new Map(fit.channels.map((c) => [c.name, c.count]))).toEqual(expected);
+    expect(fit.rows).toBe(lines.length);
   });
 });
