@@ -1,11 +1,11 @@
 /** Release through outages: storage down (recorded failed, retried later) and SMTP down (mail waits in the outbox). */
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { auditEntries, mailOutbox, releases } from '../../api/db/schema/index';
 import { loadConfig } from '../../api/config';
 import { signedIn, startTestApp, type TestApp } from './support/test-app';
 import { mailFor } from './support/mailbox';
-import { approvedRevision, reviewCast, savedStudy, type ReviewCast } from './support/revision-setup';
+import { approvedRevision, mailArrives, reviewCast, savedStudy, type ReviewCast } from './support/revision-setup';
 
 let t: TestApp;
 let broken: TestApp;
@@ -63,11 +63,17 @@ describe('release while the SMTP relay is down', () => {
     expect((await mailFor(c.emails.client)).filter((m) => m.subject.includes('Kiosk, mail outage'))).toHaveLength(0);
 
     await smtpAccepts(true);
-    // Make the retry due now instead of waiting out the backoff.
-    await t.ctx.db.update(mailOutbox).set({ nextAttemptAt: new Date() }).where(eq(mailOutbox.dedupeKey, key));
-    await t.ctx.outbox.kick();
-    const [sent] = await t.ctx.db.select().from(mailOutbox).where(eq(mailOutbox.dedupeKey, key));
-    expect(sent).toMatchObject({ status: 'sent' });
+    // Make the retry due now instead of waiting out the backoff. The test server's own outbox
+    // drains the same table and may hold the row's lease for a moment, so poll.
+    let status = 'pending';
+    for (let i = 0; i < 100 && status !== 'sent'; i++) {
+      await t.ctx.db.update(mailOutbox).set({ nextAttemptAt: new Date() }).where(and(eq(mailOutbox.dedupeKey, key), eq(mailOutbox.status, 'pending')));
+      await t.ctx.outbox.kick();
+      status = (await t.ctx.db.select().from(mailOutbox).where(eq(mailOutbox.dedupeKey, key)))[0]!.status;
+      if (status !== 'sent') await new Promise((r) => setTimeout(r, 100));
+    }
+    expect(status).toBe('sent');
+    await mailArrives(c.emails.client, /^Released: Kiosk, mail outage, revision 1$/);
     expect((await mailFor(c.emails.client)).filter((m) => m.subject === 'Released: Kiosk, mail outage, revision 1')).toHaveLength(1);
     expect(await t.ctx.db.select().from(releases).where(eq(releases.revisionId, id))).toEqual([expect.objectContaining({ status: 'released', attempts: 1 })]);
   });

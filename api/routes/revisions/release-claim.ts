@@ -1,32 +1,36 @@
-import { and, eq, lt, or, sql } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { AppContext } from '../../context';
-import { releases } from '../../db/schema/index';
+import { releases, revisions } from '../../db/schema/index';
 import { conflict } from '../../http-error';
+import { illegalTransition } from './revision-state';
 
 /** How long one attempt may hold the release before another request may take it over (a crashed process). */
 const LEASE_MS = 5 * 60_000;
 
 /**
- * Claims the release of a revision for this request, or throws 409. First attempt: the INSERT of
- * the one row per revision (unique) succeeds for exactly one request. Retry: a conditional UPDATE
- * from `failed` (or from an expired lease) back to `releasing` succeeds for exactly one request.
- * Returns the attempt number, which fences the final write.
+ * Claims the release of a revision for this request, or throws 409. A short transaction locks the
+ * revision row first (so claims of one revision queue up instead of deadlocking on the unique
+ * index), re-checks that it is still approved, then creates the release row (first attempt) or
+ * moves it from failed, or from an expired lease, back to releasing. Returns the attempt number,
+ * which fences the final write. Lock order everywhere: revision row, then release row.
  */
 export async function claimRelease(ctx: AppContext, revisionId: number): Promise<number> {
-  const now = new Date();
-  const leaseUntil = new Date(now.getTime() + LEASE_MS);
-  const [ins] = await ctx.db.insert(releases).ignore().values({ revisionId, status: 'releasing', attempts: 1, leaseUntil, updatedAt: now });
-  if (ins.affectedRows === 1) return 1;
-  const [upd] = await ctx.db
-    .update(releases)
-    .set({ status: 'releasing', attempts: sql`${releases.attempts} + 1`, leaseUntil, updatedAt: now })
-    .where(and(eq(releases.revisionId, revisionId), or(eq(releases.status, 'failed'), and(eq(releases.status, 'releasing'), lt(releases.leaseUntil, now)))));
-  if (upd.affectedRows === 1) {
-    const [row] = await ctx.db.select({ attempts: releases.attempts }).from(releases).where(eq(releases.revisionId, revisionId));
-    return row!.attempts;
-  }
-  const [row] = await ctx.db.select({ status: releases.status }).from(releases).where(eq(releases.revisionId, revisionId));
-  throw conflict(row?.status === 'released' ? 'This revision is already released.' : 'A release of this revision is under way; wait a moment and reload.');
+  return ctx.db.transaction(async (tx) => {
+    const now = new Date();
+    const leaseUntil = new Date(now.getTime() + LEASE_MS);
+    const [rev] = await tx.select({ status: revisions.status, number: revisions.number }).from(revisions).where(eq(revisions.id, revisionId)).for('update');
+    if (!rev) throw conflict('This revision no longer exists.');
+    if (rev.status !== 'approved') throw illegalTransition(rev.number, rev.status, 'release');
+    const [row] = await tx.select().from(releases).where(eq(releases.revisionId, revisionId)).for('update');
+    if (!row) {
+      await tx.insert(releases).values({ revisionId, status: 'releasing', attempts: 1, leaseUntil, updatedAt: now });
+      return 1;
+    }
+    const stale = row.status === 'releasing' && (row.leaseUntil === null || row.leaseUntil < now);
+    if (row.status !== 'failed' && !stale) throw conflict('A release of this revision is under way; wait a moment and reload.');
+    await tx.update(releases).set({ status: 'releasing', attempts: row.attempts + 1, leaseUntil, updatedAt: now }).where(eq(releases.id, row.id));
+    return row.attempts + 1;
+  });
 }
 
 /** Records a failed attempt with its reason; the revision stays approved and may be released again. */

@@ -65,14 +65,15 @@ export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: 
   }
   const fileSha256 = createHash('sha256').update(file).digest('hex');
   await ctx.db.transaction(async (tx) => {
-    const [rel] = await tx
-      .update(releases)
-      .set({ status: 'released', s3Key: key, fileSha256, fileSize: file.length, releasedAt, releasedBy: by.id, lastError: null, leaseUntil: null, updatedAt: new Date() })
-      .where(and(eq(releases.revisionId, revision.id), eq(releases.status, 'releasing'), eq(releases.attempts, attempt)));
+    // Revision row first, then the release row: the same lock order as claimRelease.
     const [rev] = await tx
       .update(revisions)
       .set({ status: 'released', releasedAt, version: sql`${revisions.version} + 1` })
       .where(and(eq(revisions.id, revision.id), eq(revisions.status, 'approved')));
+    const [rel] = await tx
+      .update(releases)
+      .set({ status: 'released', s3Key: key, fileSha256, fileSize: file.length, releasedAt, releasedBy: by.id, lastError: null, leaseUntil: null, updatedAt: new Date() })
+      .where(and(eq(releases.revisionId, revision.id), eq(releases.status, 'releasing'), eq(releases.attempts, attempt)));
     // A takeover of an expired lease means another attempt owns the release now: write nothing.
     if (rel.affectedRows !== 1 || rev.affectedRows !== 1) throw new HttpError(409, 'conflict', 'Another release attempt took over this revision; reload to see its outcome.');
     await tx.update(studies).set({ status: 'released' }).where(eq(studies.id, rc.study.id));
