@@ -11,10 +11,12 @@ export const MAX_BLOCKS_PER_STUDY = 500;
 export const STUDY_STATUSES = ['draft', 'in_review', 'changes_requested', 'approved', 'released'] as const;
 export type StudyStatus = (typeof STUDY_STATUSES)[number];
 /**
- * Statuses in which a study is still a draft in the broad sense: its document can be saved and
- * assumption changes recompute its blocks. In review, approved and released studies are frozen.
+ * Statuses in which the study's working draft can be saved and assumption changes recompute its
+ * blocks: all of them. A study's status tells where its latest revision stands; what review,
+ * approval and release freeze is that revision's snapshot, never the draft — so the author keeps
+ * writing while a revision is in review, and revision 2 can follow a released revision 1.
  */
-export const DRAFT_STUDY_STATUSES = ['draft', 'changes_requested'] as const satisfies readonly StudyStatus[];
+export const DRAFT_STUDY_STATUSES = STUDY_STATUSES;
 
 /** Client-generated ids of model blocks and sections; the server replaces missing or duplicate ones. */
 export const BLOCK_ID_PATTERN = /^[A-Za-z0-9_-]{6,40}$/;

@@ -119,7 +119,7 @@ describe('illegal transitions', () => {
 });
 
 describe('approved revisions are immutable', () => {
-  it('refuses decisions, comments, new submissions and document saves once approved', async () => {
+  it('refuses decisions, comments and new submissions once approved, and keeps the approved snapshot when the draft changes', async () => {
     const study = await savedStudy(c.consultant, c.engagementId, 'Frozen');
     const id = await approvedRevision(c, study.id);
     expect((await c.otherPartner.post(`/api/revisions/${id}/decision`, { decision: 'request-changes', reason: 'x' })).status).toBe(409);
@@ -129,7 +129,12 @@ describe('approved revisions are immutable', () => {
     expect(again.body.error.message).toMatch(/approved and waiting to be released/);
     const s = (await c.consultant.get(`/api/studies/${study.id}`)).body.study;
     expect(s.status).toBe('approved');
-    expect((await c.consultant.put(`/api/studies/${study.id}/document`, { document: studyDocument(5), baseVersion: s.version })).status).toBe(409);
+    // The working draft stays editable (for revision 2); the approved revision itself does not move.
+    const before = (await c.partner.get(`/api/revisions/${id}`)).body.revision.sha256;
+    expect((await c.consultant.put(`/api/studies/${study.id}/document`, { document: studyDocument(5), baseVersion: s.version })).status).toBe(200);
+    const after = (await c.partner.get(`/api/revisions/${id}`)).body.revision;
+    expect(after.sha256).toBe(before);
+    expect(after.integrity.ok).toBe(true);
   });
 
   it('reports a tampered snapshot on every read, and refuses to release it', async () => {

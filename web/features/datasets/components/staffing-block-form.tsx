@@ -29,7 +29,7 @@ export function StaffingBlockForm({ datasetId, engagementId }: { datasetId: numb
   const [level, setLevel] = useState('80');
   const [within, setWithin] = useState('15');
   const [message, setMessage] = useState<string | null>(null);
-  const drafts = (studies.data ?? []).filter((s) => s.status === 'draft' || s.status === 'changes_requested');
+  const drafts = studies.data ?? [];
   const timed = (register.data ?? []).filter((a) => UNIT_INFO[a.unit].dimension === 'rate' || UNIT_INFO[a.unit].dimension === 'duration');
 
   const submit = (e: FormEvent) => {

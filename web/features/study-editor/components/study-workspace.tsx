@@ -102,7 +102,7 @@ export function StudyWorkspace({ study, onReload }: { study: StudyDetail; onRelo
         )}
         {!editable && (
           <Banner tone="info" title="This study is read-only">
-            {autosave.status === 'frozen' && autosave.message ? autosave.message : 'It is in review, approved or released; its text can no longer change.'}
+            {autosave.status === 'frozen' && autosave.message ? autosave.message : 'Your role can read this study but not change it.'}
           </Banner>
         )}
         {study.safetyCritical && <StudyCautions />}
