@@ -57,7 +57,9 @@ describe('a study from submission to a deliverable the client verifies', () => {
     await page.getByRole('dialog', { name: 'Revision 1 submitted' }).waitFor();
     await screenshot(page, 'review-submitted');
     await page.getByRole('button', { name: 'Close' }).click();
-    await page.getByText('This study is read-only').waitFor();
+    // The draft stays editable; the study now shows its latest revision's state and offers no second submission.
+    await page.getByText('In review', { exact: true }).first().waitFor();
+    expect(await page.getByRole('button', { name: 'Submit for review' }).count()).toBe(0);
 
     await page.getByRole('link', { name: 'Revisions' }).click();
     const row = page.getByRole('table', { name: `Revisions of ${studyTitle}` }).getByRole('row').filter({ hasText: 'In review' });

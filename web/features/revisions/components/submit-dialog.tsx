@@ -38,8 +38,8 @@ export function SubmitDialog({ number, working, error, submitted, onConfirm, onC
         {submitted ? (
           <>
             <Banner tone="ok">
-              The partners of this engagement were told. The study is read-only while they review it; if they ask for changes you can edit and submit
-              again.
+              The partners of this engagement were told. Revision {submitted.number} stays exactly as submitted; you can keep working on the draft,
+              and your changes go into the next revision.
             </Banner>
             <div className="flex flex-wrap gap-2">
               <Link to={paths.revision(submitted.id)} className="rounded-md bg-accent px-4 py-2 font-medium text-white no-underline hover:bg-accent-strong">

@@ -11,7 +11,7 @@ interface SubmitRevisionButtonProps {
   /** The editor's save state and its "save now", so the submission is the text on screen. */
   saveStatus: string;
   saveNow: () => Promise<void>;
-  /** Called when the outcome dialog closes after a submission, to reload the now read-only study. */
+  /** Called when the outcome dialog closes after a submission, to reload the study with its new status. */
   onSubmitted: () => Promise<void>;
 }
 
@@ -69,7 +69,7 @@ export function SubmitRevisionButton({ studyId, saveStatus, saveNow, onSubmitted
           onConfirm={() => void confirm()}
           onClose={() => {
             setOpen(false);
-            // Reloading re-creates the editor (now read-only), so it waits until the outcome was read.
+            // Reloading re-creates the editor, so it waits until the outcome was read.
             if (submit.isSuccess) void onSubmitted();
           }}
         />

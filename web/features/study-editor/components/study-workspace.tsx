@@ -16,6 +16,9 @@ import { ConflictBanner } from './conflict-banner';
 import { SaveIndicator } from './save-indicator';
 import { StudyStatusBadge } from './study-status-badge';
 
+/** A new revision may be submitted unless one is still in review or approved and not yet released. */
+const SUBMITTABLE = new Set(['draft', 'changes_requested', 'released']);
+
 /** The study being written: title, save state, the editor with its blocks' results and the register. */
 export function StudyWorkspace({ study, onReload }: { study: StudyDetail; onReload: () => Promise<void> }) {
   const navigate = useNavigate();
@@ -57,7 +60,7 @@ export function StudyWorkspace({ study, onReload }: { study: StudyDetail; onRelo
           <Link to={paths.studyRevisions(study.id)} className="underline-offset-4 hover:underline">
             Revisions
           </Link>
-          {draft && <SubmitRevisionButton studyId={study.id} saveStatus={autosave.status} saveNow={autosave.saveNow} onSubmitted={onReload} />}
+          {SUBMITTABLE.has(study.status) && <SubmitRevisionButton studyId={study.id} saveStatus={autosave.status} saveNow={autosave.saveNow} onSubmitted={onReload} />}
           <Link to={paths.studyReader(study.id)} className="rounded-md border border-rule-strong px-3 py-1.5 text-ink no-underline hover:border-ink-soft">
             Reading view
           </Link>
