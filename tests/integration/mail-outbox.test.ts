@@ -21,16 +21,24 @@ describe('the mail outbox', () => {
     await t.ctx.outbox.enqueue({ to, subject: 'Outage check', text: 'held until the relay answers' });
     await t.ctx.outbox.kick();
     const [held] = await t.ctx.db.select().from(mailOutbox).where(eq(mailOutbox.toAddress, to));
-    expect(held).toMatchObject({ status: 'pending', attempts: 1 });
+    // The running app's own dispatcher drains the same table, so it may have tried as well.
+    expect(held).toMatchObject({ status: 'pending' });
+    expect(held!.attempts).toBeGreaterThanOrEqual(1);
     expect(held!.lastError).toMatch(/451|unavailable/i);
     expect(await mailFor(to)).toHaveLength(0);
 
     await smtpAccepts(true);
     // Make the retry due now instead of waiting out the backoff.
     await t.ctx.db.update(mailOutbox).set({ nextAttemptAt: new Date() }).where(eq(mailOutbox.toAddress, to));
-    await t.ctx.outbox.kick();
-    const [sent] = await t.ctx.db.select().from(mailOutbox).where(eq(mailOutbox.toAddress, to));
-    expect(sent).toMatchObject({ status: 'sent', attempts: 2 });
+    let sent: typeof held;
+    for (let i = 0; i < 50; i++) {
+      await t.ctx.outbox.kick();
+      [sent] = await t.ctx.db.select().from(mailOutbox).where(eq(mailOutbox.toAddress, to));
+      if (sent?.status === 'sent') break;
+      await new Promise((r) => setTimeout(r, 200));
+    }
+    expect(sent!.status).toBe('sent');
+    expect(sent!.attempts).toBeGreaterThanOrEqual(2);
     expect((await mailFor(to)).map((m) => m.subject)).toEqual(['Outage check']);
   });
 
