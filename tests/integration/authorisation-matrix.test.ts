@@ -5,9 +5,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Role } from '../../shared/schemas/roles';
 import { agent, makeEngagement, makeUser, signedIn, startTestApp, type Agent, type TestApp } from './support/test-app';
+import { expectMatrixAnswer, matrixCases, WHO, type Who } from './support/matrix';
 
-type Who = Role | 'anonymous';
-const WHO: Who[] = ['admin', 'partner', 'consultant', 'client', 'anonymous'];
 
 let t: TestApp;
 const agents = new Map<Who, Agent>();
@@ -62,17 +61,7 @@ const rows: Row[] = [
 ];
 
 describe.each(WHO)('as %s', (who) => {
-  it.each(rows.map((r) => [`${r.method.toUpperCase()} ${r.path.toString().replace(/^\(\) => /, '')}`, r] as const))(
-    '%s answers as the matrix says',
-    async (_name, row) => {
-      const a = agents.get(who)!;
-      const res = row.method === 'get' || row.method === 'delete' ? await a[row.method](row.path()) : await a[row.method](row.path(), row.body?.());
-      expect({ status: res.status, body: res.status >= 400 ? Object.keys(res.body) : 'ok' }).toEqual({
-        status: row.expect[who],
-        body: row.expect[who] >= 400 ? ['error'] : 'ok',
-      });
-    },
-  );
+  it.each(matrixCases(rows))('%s answers as the matrix says', (_name, row) => expectMatrixAnswer(agents.get(who)!, who, row));
 });
 
 describe('engagement ids of other engagements', () => {
