@@ -6,7 +6,7 @@ import type { Browser, Page } from 'playwright-core';
 import { launchBrowser } from './support/browser';
 import { demo, type DemoRole } from './support/demo';
 import { screenshot } from './support/screenshot';
-import { signIn } from './support/sign-in';
+import { signedInPage } from './support/sign-in';
 
 let browser: Browser;
 
@@ -17,12 +17,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function signedIn(role: DemoRole): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1360, height: 900 }, locale: 'en-GB' });
-  const page = await context.newPage();
-  await signIn(page, role);
-  return page;
-}
+const signedIn = (role: DemoRole): Promise<Page> => signedInPage(browser, role, 1360);
 
 const write = { 'x-sojourn-csrf': '1' };
 

@@ -3,7 +3,7 @@ import type { Browser, Locator, Page } from 'playwright-core';
 import { launchBrowser } from './support/browser';
 import { demo, type DemoRole } from './support/demo';
 import { screenshot } from './support/screenshot';
-import { signIn } from './support/sign-in';
+import { signedInPage } from './support/sign-in';
 
 let browser: Browser;
 
@@ -14,12 +14,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function signedIn(role: DemoRole): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 }, locale: 'en-GB' });
-  const page = await context.newPage();
-  await signIn(page, role);
-  return page;
-}
+const signedIn = (role: DemoRole): Promise<Page> => signedInPage(browser, role);
 
 /** A results cell as printed: decimal-alignment padding (figure spaces) removed. */
 async function resultFor(table: Locator, measure: string): Promise<string> {
