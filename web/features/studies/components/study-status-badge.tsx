@@ -1,16 +1,15 @@
 import type { StudyStatus } from '#shared/schemas/studies';
 import { StatusBadge, type StatusTone } from '../../../components/ui/status-badge';
+import { REVISION_STATUS_WORDS } from '../../revisions/components/revision-status-badge';
 
-const LOOK: Record<StudyStatus, { label: string; tone: StatusTone }> = {
-  draft: { label: 'Draft', tone: 'quiet' },
-  in_review: { label: 'With the partner', tone: 'accent' },
-  changes_requested: { label: 'Changes asked for', tone: 'warn' },
-  approved: { label: 'Signed off', tone: 'ok' },
-  released: { label: 'Released to client', tone: 'ok' },
-};
+/**
+ * Where a study's latest revision stands. One set of words for the list, the editor and the
+ * reader, the same as the revisions' own, so a state is never called two things.
+ */
+export const STUDY_STATUS_WORDS: Record<StudyStatus, string> = { draft: 'Draft', ...REVISION_STATUS_WORDS };
 
-/** Where a study stands in its review, in words a consultant uses. */
+const TONES: Record<StudyStatus, StatusTone> = { draft: 'quiet', in_review: 'accent', changes_requested: 'warn', approved: 'ok', released: 'ok' };
+
 export function StudyStatusBadge({ status }: { status: StudyStatus }) {
-  const { label, tone } = LOOK[status];
-  return <StatusBadge tone={tone}>{label}</StatusBadge>;
+  return <StatusBadge tone={TONES[status]}>{STUDY_STATUS_WORDS[status]}</StatusBadge>;
 }

@@ -14,7 +14,7 @@ import { useAutosave } from '../api/use-autosave';
 import { SubmitRevisionButton } from '../../revisions/components/submit-revision-button';
 import { ConflictBanner } from './conflict-banner';
 import { SaveIndicator } from './save-indicator';
-import { StudyStatusBadge } from './study-status-badge';
+import { StudyStatusBadge } from '../../studies/components/study-status-badge';
 
 /** A new revision may be submitted unless one is still in review or approved and not yet released. */
 const SUBMITTABLE = new Set(['draft', 'changes_requested', 'released']);

@@ -10,14 +10,8 @@ import { formatDate } from '../../../lib/format-date';
 import { useCurrentUser } from '../../auth/api/use-current-user';
 import { readerStudyQuery } from '../api/reader-query';
 import { ReaderDocument, type DocNode } from './reader-document';
+import { STUDY_STATUS_WORDS } from '../../studies/components/study-status-badge';
 
-const STATUS_WORDS: Record<string, string> = {
-  draft: 'Draft',
-  in_review: 'In review',
-  changes_requested: 'Changes requested',
-  approved: 'Approved',
-  released: 'Released',
-};
 
 /** Route /studies/:id/read — the study as the client will read it, with no editing chrome. */
 export function StudyReaderScreen() {
@@ -52,7 +46,7 @@ function StudyReader({ id }: { id: number }) {
           <p className="font-sans text-xs font-semibold tracking-widest text-ink-faint uppercase">{s.engagementName}</p>
           <h1 className="mt-2 font-serif text-3xl leading-tight font-bold">{s.title}</h1>
           <p className="mt-3 font-sans text-sm text-ink-soft">
-            {STATUS_WORDS[s.status] ?? s.status} · version {s.version} · {formatDate(s.updatedAt, false)}
+            {STUDY_STATUS_WORDS[s.status]} · version {s.version} · {formatDate(s.updatedAt, false)}
           </p>
         </header>
         {s.safetyCritical && <StudyCautions />}
