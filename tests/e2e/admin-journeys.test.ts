@@ -102,6 +102,7 @@ describe('a person who forgot their password', () => {
     await person.getByRole('button', { name: 'Accept and sign in' }).click();
     await person.getByRole('button', { name: 'Sign out' }).click();
     await person.waitForURL('**/sign-in');
+    await person.getByRole('heading', { name: 'Sign in' }).waitFor();
 
     await person.getByRole('link', { name: 'Forgot your password?' }).click();
     await person.getByLabel('E-mail').fill(email);

@@ -9,13 +9,12 @@ import { paths } from './paths';
 
 export function TopBar() {
   const user = useCurrentUser();
-  const signOut = useSignOut();
   const navigate = useNavigate();
+  const signOut = useSignOut(() => navigate(paths.signIn, { replace: true }));
   const toast = useToast();
 
   function leave() {
     signOut.mutate(undefined, {
-      onSuccess: () => navigate(paths.signIn, { replace: true }),
       onError: (err) => toast.show(`Signing out failed: ${err.message}`, 'danger'),
     });
   }

@@ -25,13 +25,18 @@ export function useSignIn() {
   });
 }
 
-export function useSignOut() {
+/**
+ * Signs out. `leave` runs first on success (the caller moves to the sign-in page), and only then is
+ * the session forgotten: forgetting it first makes RequireSession redirect as well, and that
+ * second, late navigation could pull the person back from a page they had already moved on to.
+ */
+export function useSignOut(leave: () => void) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: () => api('/api/auth/sign-out', { method: 'POST' }),
+    onSuccess: leave,
     onSettled: () => {
-      // Forget the person first so RequireSession unmounts the screens, then drop their data;
-      // the other order lets still-mounted screens refetch (and get 401s) in between.
+      // Forget the person first so no screen refetches (and gets 401s), then drop their data.
       qc.setQueryData(authKeys.session(), null);
       qc.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.all[0] });
     },
