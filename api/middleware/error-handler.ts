@@ -9,7 +9,46 @@ export function zodIssues(err: ZodError): { path: string; message: string }[] {
   return err.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
 }
 
-const DB_DOWN = new Set(['ECONNREFUSED', 'PROTOCOL_CONNECTION_LOST', 'ETIMEDOUT', 'ECONNRESET', 'ER_CON_COUNT_ERROR']);
+const DB_DOWN = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EHOSTUNREACH',
+  'ENOTFOUND',
+  'EPIPE',
+  'PROTOCOL_CONNECTION_LOST',
+  'PROTOCOL_ENQUEUE_AFTER_FATAL_ERROR',
+  'ER_CON_COUNT_ERROR',
+  'ER_SERVER_SHUTDOWN',
+  'ER_CONNECTION_KILLED',
+]);
+
+/** AWS SDK errors (object storage) carry `$metadata`; network failures arrive with a Node code. */
+function fromStorage(err: unknown): boolean {
+  return typeof err === 'object' && err !== null && '$metadata' in err;
+}
+
+/** Storage did not answer (no HTTP status: refused, reset, timed out) or answered 5xx. */
+function storageDown(err: unknown): boolean {
+  if (!fromStorage(err)) return false;
+  const status = (err as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode;
+  return status === undefined || status >= 500;
+}
+
+/**
+ * True when the database could not be reached. Drizzle wraps the driver's error in a
+ * DrizzleQueryError whose `cause` carries the code, so the whole cause chain is searched;
+ * mysql2 also marks any error that killed its connection `fatal`.
+ */
+function databaseDown(err: unknown): boolean {
+  // The AWS SDK reports a refused storage connection with the same Node codes: not the database.
+  if (fromStorage(err)) return false;
+  let e = err as { code?: unknown; fatal?: unknown; cause?: unknown } | undefined;
+  for (let depth = 0; e && typeof e === 'object' && depth < 5; depth++, e = e.cause as typeof e) {
+    if ((typeof e.code === 'string' && DB_DOWN.has(e.code)) || e.fatal === true) return true;
+  }
+  return false;
+}
 
 function toBody(err: unknown): { status: number; body: ApiErrorBody } {
   if (err instanceof HttpError) {
@@ -31,7 +70,10 @@ function toBody(err: unknown): { status: number; body: ApiErrorBody } {
   if (e.type === 'entity.parse.failed') {
     return { status: 400, body: { error: { code: 'validation_failed', message: 'The request body is not valid JSON.' } } };
   }
-  if (e.code && DB_DOWN.has(e.code)) {
+  if (storageDown(err)) {
+    return { status: 503, body: { error: { code: 'storage_unavailable', message: 'The file store is unavailable; try again in a few minutes.' } } };
+  }
+  if (databaseDown(err)) {
     return { status: 503, body: { error: { code: 'unavailable', message: 'The database is unavailable; try again in a few seconds.' } } };
   }
   return { status: 500, body: { error: { code: 'internal', message: 'Something went wrong on the server. It has been logged.' } } };
