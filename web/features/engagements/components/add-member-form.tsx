@@ -1,7 +1,9 @@
 import { useState, type FormEvent } from 'react';
+import { Link } from 'react-router-dom';
 import { useQuery } from '@tanstack/react-query';
 import { addMemberSchema } from '#shared/schemas/engagements';
 import { ROLE_LABELS } from '#shared/schemas/roles';
+import { paths } from '../../../app/paths';
 import { Banner } from '../../../components/ui/banner';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/select-field';
@@ -57,6 +59,10 @@ export function AddMemberForm({ engagementId, memberIds }: { engagementId: numbe
           Add to engagement
         </Button>
       </div>
+      {/* A new person is not in the list until invited; say where that is done. */}
+      <p className="mt-3 text-sm text-ink-soft">
+        Someone without an account? <Link to={paths.adminUsers}>Invite them under People</Link>, then add them here.
+      </p>
     </form>
   );
 }
