@@ -1,4 +1,4 @@
-import { useId, useState } from 'react';
+import { useId, useRef, useState } from 'react';
 import type { InputField } from '#shared/queue/index';
 import { isAssumptionLink } from '#shared/schemas/model-block';
 import { readableDuration, TIME_UNITS, toFieldValue, type TimeUnit } from '#shared/units/units';
@@ -44,6 +44,12 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
   const env = useBlockEnvironment();
   const [unit, setUnit] = useState<DisplayUnit>(() => initialDisplayUnit(kind, value, timeUnit));
   const [picking, setPicking] = useState(false);
+  // The picker disappears once used: focus goes back to this field's link button, not to the page.
+  const linkButton = useRef<HTMLButtonElement>(null);
+  const endPicking = () => {
+    setPicking(false);
+    requestAnimationFrame(() => linkButton.current?.focus());
+  };
   const linkable = ['rate', 'duration', 'count', 'probability', 'scv', 'cost', 'number'].includes(kind);
   const linked = isAssumptionLink(value) ? env.assumptions.find((a) => a.id === value.assumption) : undefined;
   const errorId = error ? `${id}-error` : undefined;
@@ -68,10 +74,10 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
         assumptions={env.assumptions}
         status={env.assumptionsStatus}
         onPick={(assumption) => {
-          setPicking(false);
+          endPicking();
           onChange({ assumption });
         }}
-        onCancel={() => setPicking(false)}
+        onCancel={endPicking}
       />
     );
   } else if (kind === 'choice') {
@@ -132,6 +138,7 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
       </div>
       {linkable && !picking && (
         <button
+          ref={linkButton}
           type="button"
           className="self-start rounded-md px-2 py-2 text-sm text-accent hover:bg-accent-tint"
           onClick={() => {
@@ -141,7 +148,9 @@ export function BlockInputField({ field, kind, value, timeUnit, error, onChange 
             onChange(v ?? undefined);
           }}
         >
+          {/* Every input has this button: the field's name tells them apart for screen readers. */}
           {isAssumptionLink(value) ? 'Unlink' : 'Link to assumption'}
+          <span className="sr-only"> for {field.label}</span>
         </button>
       )}
     </div>
