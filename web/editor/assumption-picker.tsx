@@ -1,3 +1,4 @@
+import { useRef } from 'react';
 import type { Assumption } from '#shared/schemas/assumptions';
 import { UNIT_INFO, toFieldValue, type TimeUnit } from '#shared/units/units';
 import { inputClass } from '../components/ui/field';
@@ -16,11 +17,17 @@ interface AssumptionPickerProps {
   onCancel: () => void;
 }
 
+/** Keys that move a closed select's choice in Chromium and fire "change" at once. */
+const BROWSING_KEYS = new Set(['ArrowUp', 'ArrowDown', 'Home', 'End', 'PageUp', 'PageDown']);
+
 /**
  * Chooses an assumption of the engagement's register for one input. Only assumptions whose
- * unit can feed the input are offered (a duration may feed a rate: it is inverted).
+ * unit can feed the input are offered (a duration may feed a rate: it is inverted). A mouse pick
+ * links at once; by keyboard the arrows (or typed letters) only move the choice and Enter links,
+ * so browsing the list does not link the first assumption passed on the way.
  */
 export function AssumptionPicker({ id, fieldLabel, fieldKind, timeUnit, assumptions, status, onPick, onCancel }: AssumptionPickerProps) {
+  const browsing = useRef(false);
   const fitting = assumptions.filter((a) => toFieldValue(a.value, a.unit, fieldKind, timeUnit) !== null);
   if (status === 'pending') return <p className="text-sm text-ink-faint">Loading the assumption register…</p>;
   if (status === 'error') return <p className="text-sm text-danger">The assumption register could not be loaded.</p>;
@@ -35,26 +42,46 @@ export function AssumptionPicker({ id, fieldLabel, fieldKind, timeUnit, assumpti
     );
   }
   return (
-    <select
-      id={id}
-      autoFocus
-      aria-label={`Assumption for ${fieldLabel}`}
-      className={inputClass}
-      defaultValue=""
-      onChange={(e) => e.target.value && onPick(Number(e.target.value))}
-      onKeyDown={(e) => {
-        if (e.key === 'Escape') {
-          e.stopPropagation();
-          onCancel();
-        }
-      }}
-    >
-      <option value="">Choose an assumption…</option>
-      {fitting.map((a) => (
-        <option key={a.id} value={a.id}>
-          {describeAssumption(a)}
-        </option>
-      ))}
-    </select>
+    <>
+      <select
+        id={id}
+        autoFocus
+        aria-label={`Assumption for ${fieldLabel}`}
+        aria-describedby={`${id}-keys`}
+        className={inputClass}
+        defaultValue=""
+        onChange={(e) => {
+          if (browsing.current) browsing.current = false;
+          else if (e.target.value) onPick(Number(e.target.value));
+        }}
+        onKeyDown={(e) => {
+          if (e.key === 'Escape') {
+            e.stopPropagation();
+            onCancel();
+          } else if (e.key === 'Enter') {
+            e.preventDefault();
+            e.stopPropagation();
+            if (e.currentTarget.value) onPick(Number(e.currentTarget.value));
+          } else if (BROWSING_KEYS.has(e.key) || (e.key.length === 1 && !e.ctrlKey && !e.metaKey && !e.altKey)) {
+            browsing.current = true;
+          }
+        }}
+        // A key that moved nothing fires no change; the next mouse pick must still link.
+        onKeyUp={() => {
+          browsing.current = false;
+        }}
+      >
+        <option value="">Choose an assumption…</option>
+        {fitting.map((a) => (
+          <option key={a.id} value={a.id}>
+            {describeAssumption(a)}
+          </option>
+        ))}
+      </select>
+      <span id={`${id}-keys`} className="sr-only">
+        Arrow keys choose, Enter links, Escape cancels.
+      </span>
+    </>
   );
 }
+

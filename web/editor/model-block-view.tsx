@@ -81,7 +81,7 @@ export function ModelBlockView({ node, updateAttributes, deleteNode, selected }:
               </Button>
             )}
             <span ref={editButton}>
-              <Button size="sm" variant={editing ? 'secondary' : 'quiet'} aria-expanded={editing} onClick={() => (editing ? close() : setEditing(true))}>
+              <Button size="sm" variant={editing ? 'secondary' : 'quiet'} aria-expanded={editing} data-block-edit onClick={() => (editing ? close() : setEditing(true))}>
                 {editing ? 'Close settings' : 'Edit block'}
               </Button>
             </span>

@@ -80,7 +80,7 @@ export function StudyWorkspace({ study, onReload }: { study: StudyDetail; onRelo
             autosave.changeTitle(e.target.value);
           }}
           onBlur={() => void autosave.saveNow()}
-          className="min-w-0 flex-1 rounded-md border border-transparent bg-transparent px-2 py-1 font-serif text-2xl font-bold text-ink hover:border-rule focus:border-accent focus:outline-none sm:text-3xl"
+          className="min-w-0 flex-1 rounded-md border border-transparent bg-transparent px-2 py-1 font-serif text-2xl font-bold text-ink hover:border-rule focus:border-accent sm:text-3xl"
         />
         <StudyStatusBadge status={study.status} />
       </header>
