@@ -7,7 +7,6 @@ import { paths } from '../../../app/paths';
 import { Banner } from '../../../components/ui/banner';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/select-field';
-import { useToast } from '../../../components/ui/use-toast';
 import { useFormErrors } from '../../../lib/use-form-errors';
 import { userListQuery } from '../../users/api/user-queries';
 import { useAddMember } from '../api/engagement-mutations';
@@ -19,8 +18,10 @@ export function AddMemberForm({ engagementId, memberIds }: { engagementId: numbe
   const users = useQuery(userListQuery());
   const add = useAddMember(engagementId);
   const form = useFormErrors(FIELDS);
-  const toast = useToast();
   const [userId, setUserId] = useState('');
+  // Confirmed beside the button rather than in a toast: a toast sits over this button when the form
+  // is at the foot of the page, just as the next person is being added.
+  const [added, setAdded] = useState<string | null>(null);
 
   const candidates = (users.data ?? [])
     .filter((u) => u.status !== 'deactivated' && !memberIds.includes(u.id))
@@ -31,9 +32,10 @@ export function AddMemberForm({ engagementId, memberIds }: { engagementId: numbe
     e.preventDefault();
     const body = form.validate(addMemberSchema, { userId: userId ? Number(userId) : undefined });
     if (!body) return;
+    setAdded(null);
     add.mutate(body.userId, {
       onSuccess: (member) => {
-        toast.show(`${member.name} added.`, 'ok');
+        setAdded(`${member.name} added.`);
         setUserId('');
       },
       onError: form.fromError,
@@ -58,6 +60,9 @@ export function AddMemberForm({ engagementId, memberIds }: { engagementId: numbe
         <Button type="submit" variant="primary" busy={add.isPending} disabled={!candidates.length}>
           Add to engagement
         </Button>
+        <p role="status" className="self-center text-sm font-medium text-ok">
+          {added}
+        </p>
       </div>
       {/* A new person is not in the list until invited; say where that is done. */}
       <p className="mt-3 text-sm text-ink-soft">
