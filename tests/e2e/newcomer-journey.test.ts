@@ -116,6 +116,7 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
       await admin.getByRole('button', { name: 'Add to engagement' }).click();
       await admin.getByRole('table', { name: 'Members of this engagement' }).getByRole('cell', { name: email, exact: true }).waitFor();
     }
+    await admin.getByRole('status').filter({ hasText: `${consultant.name} added.` }).waitFor();
     await shot(admin, '04-engagement-members');
 
     invitation = await mailboxLink(admin, consultant.email);
@@ -242,10 +243,11 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
     await partner.getByRole('button', { name: 'Sign off revision 1' }).click();
     const release = partner.getByRole('region', { name: 'Release to the client' });
     await release.waitFor();
-    await shot(partner, '19-signed-off');
+    await shotAround(release, '19-signed-off');
     await release.getByRole('button', { name: 'Release to the client' }).click();
-    await partner.getByText('Revision 1 is released').waitFor({ timeout: 60_000 });
-    await shot(partner, '20-released');
+    const released = partner.getByText('Revision 1 is released');
+    await released.waitFor({ timeout: 60_000 });
+    await shotAround(released, '20-released');
     await partner.context().close();
   });
 
