@@ -63,9 +63,11 @@ function toBody(err: unknown): { status: number; body: ApiErrorBody } {
   if (err instanceof QueueError) {
     return { status: 422, body: { error: { code: err.code, message: err.message, issues: err.issues } } };
   }
-  const e = err as { type?: string; code?: string; status?: number };
+  const e = err as { type?: string; code?: string; status?: number; limit?: number };
   if (e.type === 'entity.too.large') {
-    return { status: 413, body: { error: { code: 'payload_too_large', message: 'The request body is too large.' } } };
+    // body-parser names its limit: say it, so a client knows how much is accepted.
+    const limit = typeof e.limit === 'number' ? ` (at most ${Math.round(e.limit / 1024 / 1024)} MB here)` : '';
+    return { status: 413, body: { error: { code: 'payload_too_large', message: `The request body is too large${limit}.` } } };
   }
   if (e.type === 'entity.parse.failed') {
     return { status: 400, body: { error: { code: 'validation_failed', message: 'The request body is not valid JSON.' } } };

@@ -19,6 +19,19 @@ export const staleVersion = (current: number): HttpError =>
     { path: 'baseVersion', message: `The study is now at version ${current}` },
   ]);
 
+/**
+ * The document's size as stored (JSON characters). A body nested thousands of levels deep parses
+ * but overflows the stack when serialised again: that is the client's error (400), not a 500.
+ */
+function documentChars(document: unknown): number {
+  try {
+    return JSON.stringify(document).length;
+  } catch (err) {
+    if (!(err instanceof RangeError)) throw err;
+    throw new HttpError(400, 'validation_failed', 'document: is nested too deeply to be a study', [{ path: 'document', message: 'is nested too deeply to be a study' }]);
+  }
+}
+
 export function assertDraft(study: StudyRow): void {
   if (!(DRAFT_STUDY_STATUSES as readonly string[]).includes(study.status)) {
     throw new HttpError(409, 'conflict', `This study is ${study.status.replace('_', ' ')} and can no longer be edited.`, [{ path: 'status', message: study.status }]);
@@ -40,7 +53,7 @@ function changedSince(computed: ComputedBlock[], used: Register, now: Register):
  */
 export async function saveStudyDocument(ctx: AppContext, study: StudyRow, engagement: EngagementRow, input: SaveDocument, by: SessionUser): Promise<StudyDetail> {
   assertDraft(study);
-  if (JSON.stringify(input.document).length > DOCUMENT_MAX_CHARS) {
+  if (documentChars(input.document) > DOCUMENT_MAX_CHARS) {
     throw new HttpError(413, 'payload_too_large', `A study document is limited to ${DOCUMENT_MAX_CHARS.toLocaleString('en')} characters.`);
   }
   const clean = sanitiseDocument(input.document);
