@@ -31,6 +31,12 @@ export interface Config {
   signing: { p12Path: string | null; p12Base64: string | null; passphrase: string; demoDir: string | null; location: string };
   /** Lifetime of a presigned deliverable link, in seconds. */
   deliverableLinkSeconds: number;
+  /**
+   * How long a release attempt holds its claim without renewing it (RELEASE_LEASE_MS). A working
+   * release renews it a few times per lease; a claim whose process died expires after this and
+   * is marked failed (interrupted) by the sweeper, so the partner can release again.
+   */
+  releaseLeaseMs: number;
   smtpUrl: string;
   mailFrom: string;
   /** HTTP address of the local SMTP fake's mailbox; null in production (the mailbox page is then off). */
@@ -78,6 +84,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       location: env.SIGNING_LOCATION ?? 'Sojourn',
     },
     deliverableLinkSeconds: int(env.DELIVERABLE_LINK_SECONDS, 60),
+    releaseLeaseMs: Math.max(int(env.RELEASE_LEASE_MS, 60_000), 500),
     smtpUrl: env.SMTP_URL as string,
     mailFrom: env.MAIL_FROM ?? 'Sojourn <no-reply@sojourn.test>',
     mailFakeUrl: env.MAIL_FAKE_URL || null,

@@ -1,6 +1,7 @@
 import { ConfigError, loadConfig } from './config';
 import { createApp } from './app';
 import { createContext } from './context';
+import { createReleaseSweeper } from './routes/revisions/release-sweeper';
 
 /** Production entry: configuration from the environment, nothing else started. */
 let config;
@@ -16,6 +17,9 @@ try {
 const ctx = createContext(config);
 const app = createApp(ctx);
 ctx.outbox.start();
+// Releases whose process died mid-way are recorded as interrupted (failed), at start and then periodically.
+const releaseSweeper = createReleaseSweeper(ctx);
+releaseSweeper.start();
 const host = process.env.HOST ?? '127.0.0.1';
 const server = app.listen(config.port, host);
 server.on('listening', () => console.log(`[api] listening on http://${host}:${config.port}`));
@@ -26,7 +30,10 @@ server.on('error', (err: NodeJS.ErrnoException) => {
 
 const shutdown = (): void => {
   server.close(() => {
-    void ctx.close().finally(() => process.exit(0));
+    void releaseSweeper
+      .stop()
+      .then(() => ctx.close())
+      .finally(() => process.exit(0));
   });
   setTimeout(() => process.exit(0), 5_000).unref();
 };

@@ -70,13 +70,17 @@ export function createOutbox(db: Db, mailer: Mailer) {
   }
 
   return {
-    /** Queues one message; with a dedupe key a second identical event adds nothing. */
-    async enqueue(mail: OutgoingMail, dedupeKey?: string): Promise<void> {
-      await db
+    /**
+     * Queues one message; with a dedupe key a second identical event adds nothing. Given a
+     * transaction, the row commits with the caller's work (a crash cannot keep one without the
+     * other) and the caller kicks delivery after the commit.
+     */
+    async enqueue(mail: OutgoingMail, dedupeKey?: string, executor?: Pick<Db, 'insert'>): Promise<void> {
+      await (executor ?? db)
         .insert(mailOutbox)
         .values({ toAddress: mail.to, subject: mail.subject, body: mail.text, nextAttemptAt: new Date(), createdAt: new Date(), dedupeKey: dedupeKey ?? null })
         .onDuplicateKeyUpdate({ set: { dedupeKey: sql`dedupe_key` } });
-      void kick();
+      if (!executor) void kick();
     },
     kick,
     /** Periodic retries; started by the server process, not by tests that drive createApp. */

@@ -14,8 +14,8 @@ export interface AuditEvent {
   ip?: string | null;
 }
 
-/** Appends one entry; callers await it so a failed write fails the request instead of vanishing. */
-export async function recordAudit(db: Db, e: AuditEvent): Promise<void> {
+/** Appends one entry (inside the caller's transaction when given one); callers await it so a failed write fails the request instead of vanishing. */
+export async function recordAudit(db: Pick<Db, 'insert'>, e: AuditEvent): Promise<void> {
   await db.insert(auditEntries).values({
     at: new Date(),
     action: e.action,

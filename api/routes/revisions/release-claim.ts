@@ -4,20 +4,18 @@ import { releases, revisions } from '../../db/schema/index';
 import { conflict } from '../../http-error';
 import { illegalTransition } from './revision-state';
 
-/** How long one attempt may hold the release before another request may take it over (a crashed process). */
-const LEASE_MS = 5 * 60_000;
-
 /**
  * Claims the release of a revision for this request, or throws 409. A short transaction locks the
  * revision row first (so claims of one revision queue up instead of deadlocking on the unique
  * index), re-checks that it is still approved, then creates the release row (first attempt) or
  * moves it from failed, or from an expired lease, back to releasing. Returns the attempt number,
  * which fences the final write. Lock order everywhere: revision row, then release row.
+ * The lease (config.releaseLeaseMs) is renewed by holdReleaseLease while the attempt works.
  */
 export async function claimRelease(ctx: AppContext, revisionId: number): Promise<number> {
   return ctx.db.transaction(async (tx) => {
     const now = new Date();
-    const leaseUntil = new Date(now.getTime() + LEASE_MS);
+    const leaseUntil = new Date(now.getTime() + ctx.config.releaseLeaseMs);
     const [rev] = await tx.select({ status: revisions.status, number: revisions.number }).from(revisions).where(eq(revisions.id, revisionId)).for('update');
     if (!rev) throw conflict('This revision no longer exists.');
     if (rev.status !== 'approved') throw illegalTransition(rev.number, rev.status, 'release');

@@ -11,6 +11,7 @@ import { releaseReason, signPdf } from '../../signing/sign-pdf';
 import { recordAudit } from '../audit/audit.service';
 import { firmCertificate } from './firm-signer';
 import { claimRelease, failRelease } from './release-claim';
+import { holdReleaseLease } from './release-lease';
 import { assertNotSubmitter, type RevisionContext } from './revision-access';
 import { revisionSha256 } from './revision-hash';
 import { membersWithRoles, notifyRevision, submitterOf } from './revision-mails';
@@ -36,9 +37,12 @@ async function signedPdf(ctx: AppContext, rc: RevisionContext, releasedAt: Date)
 
 /**
  * Releases an approved revision: claim (one request wins), render and sign the PDF and PUT it to
- * object storage, all outside any transaction; then, only after the PUT succeeded, one transaction
- * marks the release, the revision and the study released. Any failure before that records the
- * release as failed with its reason and leaves the revision approved, so it can be retried.
+ * object storage, all outside any transaction and under a lease the attempt keeps renewing; then,
+ * only after the PUT succeeded, one transaction marks the release, the revision and the study
+ * released and queues the release mails. Any failure before that records the release as failed
+ * with its reason and leaves the revision approved, so it can be retried; a process that dies
+ * mid-way stops renewing and the sweeper (release-sweeper.ts) records it as interrupted.
+ * Never half-done: no released status without the stored PDF, no mail without the release.
  */
 export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: SessionUser, ip?: string): Promise<void> {
   const { revision } = rc;
@@ -48,22 +52,28 @@ export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: 
     throw new HttpError(409, 'integrity_failed', `The stored content of revision ${revision.number} no longer matches its SHA-256; it cannot be released.`);
   }
   const attempt = await claimRelease(ctx, revision.id);
+  const lease = holdReleaseLease(ctx, revision.id, attempt);
   const releasedAt = new Date();
   const key = deliverableKey(rc);
   let file: Buffer;
   try {
     file = await signedPdf(ctx, rc, releasedAt);
+    lease.signal.throwIfAborted();
     await ctx.storage.client.send(
       new PutObjectCommand({ Bucket: ctx.storage.bucket, Key: key, Body: file, ContentType: 'application/pdf', ContentLength: file.length }),
-      { abortSignal: AbortSignal.timeout(30_000) },
+      { abortSignal: AbortSignal.any([AbortSignal.timeout(30_000), lease.signal]) },
     );
   } catch (err) {
+    lease.release();
     const reason = `${(err as Error).name === 'Error' ? '' : `${(err as Error).name}: `}${(err as Error).message || 'unknown error'}`;
     await failRelease(ctx, revision.id, attempt, reason);
     await recordAudit(ctx.db, { action: 'release_failed', actor: by, engagementId: rc.engagement.id, subject: `${rc.study.title}, revision ${revision.number}`, detail: { revisionId: revision.id, attempt, reason }, ip });
     throw new HttpError(503, 'release_failed', `The signed PDF could not be stored (${reason}). The release was recorded as failed; revision ${revision.number} stays approved and can be released again.`);
   }
+  lease.release();
   const fileSha256 = createHash('sha256').update(file).digest('hex');
+  const fresh = { ...rc, revision: { ...revision, status: 'released' as const, releasedAt } };
+  const to = [...(await membersWithRoles(ctx, rc.engagement.id, ['client'])), ...(await submitterOf(ctx, fresh))];
   await ctx.db.transaction(async (tx) => {
     // Revision row first, then the release row: the same lock order as claimRelease.
     const [rev] = await tx
@@ -74,19 +84,21 @@ export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: 
       .update(releases)
       .set({ status: 'released', s3Key: key, fileSha256, fileSize: file.length, releasedAt, releasedBy: by.id, lastError: null, leaseUntil: null, updatedAt: new Date() })
       .where(and(eq(releases.revisionId, revision.id), eq(releases.status, 'releasing'), eq(releases.attempts, attempt)));
-    // A takeover of an expired lease means another attempt owns the release now: write nothing.
-    if (rel.affectedRows !== 1 || rev.affectedRows !== 1) throw new HttpError(409, 'conflict', 'Another release attempt took over this revision; reload to see its outcome.');
+    // The claim was lost (swept as interrupted, or taken over after its lease expired): write nothing.
+    if (rel.affectedRows !== 1 || rev.affectedRows !== 1) {
+      throw new HttpError(409, 'conflict', 'This release attempt ran past its lease and was recorded as interrupted or taken over; reload to see the revision, then release again if needed.');
+    }
     await tx.update(studies).set({ status: 'released' }).where(eq(studies.id, rc.study.id));
+    // Mails and audit entry commit with the release: a crash after the commit still sends them, one before sends none.
+    await notifyRevision(ctx, 'released', fresh, to, { actorName: by.name }, tx);
+    await recordAudit(tx, {
+      action: 'revision_released',
+      actor: by,
+      engagementId: rc.engagement.id,
+      subject: `${rc.study.title}, revision ${revision.number}`,
+      detail: { revisionId: revision.id, number: revision.number, sha256: revision.sha256, fileSha256, s3Key: key, attempt },
+      ip,
+    });
   });
-  await recordAudit(ctx.db, {
-    action: 'revision_released',
-    actor: by,
-    engagementId: rc.engagement.id,
-    subject: `${rc.study.title}, revision ${revision.number}`,
-    detail: { revisionId: revision.id, number: revision.number, sha256: revision.sha256, fileSha256, s3Key: key, attempt },
-    ip,
-  });
-  const fresh = { ...rc, revision: { ...revision, status: 'released' as const, releasedAt } };
-  const to = [...(await membersWithRoles(ctx, rc.engagement.id, ['client'])), ...(await submitterOf(ctx, fresh))];
-  await notifyRevision(ctx, 'released', fresh, to, { actorName: by.name });
+  void ctx.outbox.kick();
 }

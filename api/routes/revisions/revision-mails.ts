@@ -49,9 +49,17 @@ function body(event: RevisionEvent, rc: RevisionContext, to: Person, publicUrl: 
 
 /**
  * Queues one e-mail per recipient in the persisted outbox. The dedupe key
- * `<event>:<revisionId>:<email>` makes a repeated or concurrent event add nothing.
+ * `<event>:<revisionId>:<email>` makes a repeated or concurrent event add nothing. With a
+ * transaction the rows commit with it and the caller kicks the outbox afterwards.
  */
-export async function notifyRevision(ctx: AppContext, event: RevisionEvent, rc: RevisionContext, to: Person[], extra: { actorName: string; reason?: string }): Promise<void> {
+export async function notifyRevision(
+  ctx: AppContext,
+  event: RevisionEvent,
+  rc: RevisionContext,
+  to: Person[],
+  extra: { actorName: string; reason?: string },
+  tx?: Parameters<AppContext['outbox']['enqueue']>[2],
+): Promise<void> {
   const seen = new Set<string>();
   for (const p of to) {
     if (seen.has(p.email)) continue;
@@ -59,6 +67,6 @@ export async function notifyRevision(ctx: AppContext, event: RevisionEvent, rc: 
     const key = `${event}:${rc.revision.id}:${p.email}`;
     // The outbox key column holds 200 characters; a very long address is keyed by its hash.
     const dedupe = key.length <= 200 ? key : `${event}:${rc.revision.id}:${createHash('sha256').update(p.email).digest('hex')}`;
-    await ctx.outbox.enqueue(body(event, rc, p, ctx.config.publicUrl, extra), dedupe);
+    await ctx.outbox.enqueue(body(event, rc, p, ctx.config.publicUrl, extra), dedupe, tx);
   }
 }

@@ -15,6 +15,9 @@ export const revisionQuery = (id: number) =>
   queryOptions({
     queryKey: revisionKeys.detail(id),
     queryFn: async ({ signal }) => (await api(`/api/revisions/${id}`, { schema: revisionBody, signal })).revision,
+    // A release under way (perhaps in another tab, or interrupted and about to be recorded as
+    // failed by the server) is followed until it settles, so the panel shows the outcome.
+    refetchInterval: (query) => (query.state.data?.release?.status === 'releasing' ? 3_000 : false),
   });
 
 export const revisionCommentsQuery = (id: number) =>
