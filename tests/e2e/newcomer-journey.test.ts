@@ -16,6 +16,7 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { DEMO_LOG_OPTIONS, eventLogCsv } from '../../fakes/demo-event-log';
+import { CSRF_HEADER, CSRF_HEADER_VALUE } from '../../shared/api-error';
 import { launchBrowser } from './support/browser';
 import { demo } from './support/demo';
 import { captureDownload } from './support/download';
@@ -71,6 +72,21 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
   const heading = 'What the ticket hall log shows';
   const paragraph = `Three weeks of ticket hall arrivals were fitted before this study was written (${stamp}).`;
   let invitation = '';
+  let engagementId = 0;
+
+  // Suites that run after this one on the same stack expect the demo client in one engagement
+  // only: take them off this one again, whether the journey got to the end or not.
+  afterAll(async () => {
+    if (!engagementId) return;
+    const admin = await signedInPage(browser, 'admin');
+    const members = (await (await admin.request.get(`${demo.url}/api/engagements/${engagementId}/members`)).json()) as { members: { userId: number; email: string }[] };
+    const client = members.members.find((m) => m.email === demo.users.client);
+    if (client) {
+      const removed = await admin.request.delete(`${demo.url}/api/engagements/${engagementId}/members/${client.userId}`, { headers: { [CSRF_HEADER]: CSRF_HEADER_VALUE } });
+      expect(removed.ok()).toBe(true);
+    }
+    await admin.context().close();
+  });
 
   /** The new consultant at their own desk, signed in with the password they chose. */
   async function consultantSignsIn(): Promise<Page> {
@@ -98,6 +114,7 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
     await shot(admin, '02-new-engagement-form');
     await admin.getByRole('button', { name: 'Create engagement' }).click();
     await admin.getByRole('heading', { name: engagementName, level: 1 }).waitFor();
+    engagementId = Number(/\/engagements\/(\d+)/.exec(admin.url())?.[1]);
 
     // The new consultant has no account yet: the members panel points to where people are invited.
     await admin.getByRole('link', { name: 'Invite them under People' }).click();
