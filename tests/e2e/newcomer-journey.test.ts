@@ -73,6 +73,7 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
   const paragraph = `Three weeks of ticket hall arrivals were fitted before this study was written (${stamp}).`;
   let invitation = '';
   let engagementId = 0;
+  let pdfPath = '';
 
   // Suites that run after this one on the same stack expect the demo client in one engagement
   // only: take them off this one again, whether the journey got to the end or not.
@@ -98,7 +99,6 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
     await page.getByRole('button', { name: 'Sign out' }).waitFor();
     return page;
   }
-  let pdfPath = '';
 
   it('1. the administrator creates the engagement, invites the consultant and adds the members', async () => {
     const admin = await freshPage();
