@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { launchBrowser } from './support/browser';
 import { demo } from './support/demo';
-import { expectVisibleFocus, isFocused, shiftTabTo, tabTo } from './support/keyboard';
+import { expectVisibleFocus, isFocused, shiftTabTo, stopsWithoutVisibleFocus, tabTo } from './support/keyboard';
 import { screenshot } from './support/screenshot';
 import { signedInPage } from './support/sign-in';
 
@@ -158,5 +158,17 @@ describe('the study editor by keyboard alone', () => {
     await expect.poll(() => isFocused(settings.getByLabel('Block title'))).toBe(true);
     await page.keyboard.press('Escape');
     await expect.poll(() => isFocused(page.getByRole('button', { name: 'Edit block' }))).toBe(true);
+  });
+
+  it('shows focus on every stop of the editor with the settings of a block open', async () => {
+    await page.goto(`${demo.url}/studies/${studyId}`);
+    await page.getByRole('textbox', { name: 'Study text' }).waitFor();
+    const edit = page.getByRole('button', { name: 'Edit block' });
+    await tabTo(page, edit, 60);
+    await page.keyboard.press('Enter');
+    await page.getByRole('group', { name: 'Block settings' }).waitFor();
+    const { stops, unseen } = await stopsWithoutVisibleFocus(page, 120);
+    expect(stops).toBeGreaterThan(20);
+    expect(unseen, unseen.join('\n')).toEqual([]);
   });
 });

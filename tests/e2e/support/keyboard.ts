@@ -6,7 +6,7 @@ export function isFocused(locator: Locator): Promise<boolean> {
 }
 
 /** What has focus, in words, for failure messages. */
-function describeFocus(page: Page): Promise<string> {
+export function describeFocus(page: Page): Promise<string> {
   return page.evaluate(() => {
     const el = document.activeElement;
     if (!el || el === document.body) return 'nothing (the page body)';
@@ -41,4 +41,29 @@ export async function expectVisibleFocus(page: Page): Promise<void> {
     return { outline: s.outlineStyle !== 'none' && parseFloat(s.outlineWidth) > 0, ring: s.boxShadow !== 'none' };
   });
   if (!style || (!style.outline && !style.ring)) throw new Error(`No visible focus indicator on ${await describeFocus(page)}`);
+}
+
+/**
+ * Tabs through the page from where focus is, up to `max` stops or until focus comes back to a
+ * stop already seen, and returns the stops that showed no focus indicator.
+ */
+export async function stopsWithoutVisibleFocus(page: Page, max: number): Promise<{ stops: number; unseen: string[] }> {
+  const unseen: string[] = [];
+  const seen = new Set<string>();
+  let stops = 0;
+  for (; stops < max; stops++) {
+    await page.keyboard.press('Tab');
+    const here = await page.evaluate(() => {
+      const el = document.activeElement;
+      if (!el || el === document.body) return null;
+      // A stable identity for "been here": the element's path in the document.
+      const path: string[] = [];
+      for (let n: Element | null = el; n && n !== document.body; n = n.parentElement) path.unshift(`${n.tagName}:${Array.prototype.indexOf.call(n.parentElement?.children ?? [], n)}`);
+      return path.join('/');
+    });
+    if (here === null || seen.has(here)) break;
+    seen.add(here);
+    await expectVisibleFocus(page).catch((err: Error) => unseen.push(err.message));
+  }
+  return { stops, unseen };
 }

@@ -20,7 +20,7 @@ export function SortHeader({ label, sortKey, order, onSort, num }: SortHeaderPro
     <Th num={num} aria-sort={active ? (order.direction === 'asc' ? 'ascending' : 'descending') : 'none'}>
       <button type="button" onClick={() => onSort(next)} className={`inline-flex items-center gap-1 whitespace-nowrap uppercase hover:text-ink ${active ? 'text-ink' : ''}`}>
         {label}
-        <span aria-hidden="true" className={active ? '' : 'opacity-30'}>
+        <span aria-hidden="true" className={active ? '' : 'text-ink-faint'}>
           {active && order.direction === 'desc' ? '↓' : '↑'}
         </span>
       </button>
