@@ -9,9 +9,10 @@ import { HttpError } from '../../http-error';
  * several API processes each keeps its own, which only loosens the limit by that factor.
  */
 export function signInLimits(cfg: Config['signInLimit']): RequestHandler[] {
-  const minutes = Math.round(cfg.windowMs / 60_000);
+  const minutes = Math.max(1, Math.ceil(cfg.windowMs / 60_000));
+  const wait = minutes === 1 ? 'a minute' : `${minutes} minutes`;
   const refuse = (): HttpError =>
-    new HttpError(429, 'rate_limited', `Too many sign-in attempts. Wait ${minutes} minutes and try again, or reset your password.`);
+    new HttpError(429, 'rate_limited', `Too many sign-in attempts. Wait ${wait} and try again, or reset your password.`);
   const ip = (req: Parameters<RequestHandler>[0]): string => ipKeyGenerator(req.ip ?? 'unknown');
   return [
     rateLimit({
