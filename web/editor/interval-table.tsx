@@ -1,4 +1,5 @@
 import type { TimeUnit } from '#shared/units/units';
+import { ScrollRegion } from '../components/ui/scroll-region';
 import { alignDecimals } from './decimal-align';
 import { formatMeasureRow } from './format-measure';
 
@@ -17,7 +18,7 @@ export function IntervalTable({ intervals, timeUnit, criterion }: { intervals: r
   const rho = formatMeasureRow('rho', 'ratio', intervals.map((i) => i.rho), timeUnit);
   const cols = [alignDecimals(rates.texts), alignDecimals(achieved.texts), alignDecimals(rho.texts)];
   return (
-    <div className="mt-4 overflow-x-auto">
+    <ScrollRegion label="Servers per interval" className="mt-4 overflow-x-auto">
       <table className="results-table w-full border-collapse font-sans text-sm">
         <caption className="pb-1 text-left text-xs font-semibold text-ink-soft">Servers per interval</caption>
         <thead>
@@ -41,6 +42,6 @@ export function IntervalTable({ intervals, timeUnit, criterion }: { intervals: r
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -1,3 +1,4 @@
+import { ScrollRegion } from '../components/ui/scroll-region';
 import type { ResultRow } from './result-rows';
 
 interface ResultsTableProps {
@@ -14,7 +15,7 @@ interface ResultsTableProps {
  */
 export function ResultsTable({ caption, columns, rows }: ResultsTableProps) {
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label={caption} className="overflow-x-auto">
       <table className="results-table w-full border-collapse font-sans text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead>
@@ -48,6 +49,6 @@ export function ResultsTable({ caption, columns, rows }: ResultsTableProps) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

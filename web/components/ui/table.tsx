@@ -1,4 +1,5 @@
 import type { ReactNode, ThHTMLAttributes, TdHTMLAttributes } from 'react';
+import { ScrollRegion } from './scroll-region';
 
 interface TableProps {
   /** Read by screen readers; shown only when `showCaption` is set. */
@@ -12,12 +13,12 @@ export function Table({ caption, showCaption = false, children }: TableProps) {
   // `relative` keeps visually hidden (absolute) header labels inside the scroll box; without
   // it they widen the whole page on narrow screens.
   return (
-    <div className="relative overflow-x-auto rounded-lg border border-rule bg-sheet">
+    <ScrollRegion label={caption} className="relative overflow-x-auto rounded-lg border border-rule bg-sheet">
       <table className="w-full border-collapse text-sm">
         <caption className={showCaption ? 'px-4 py-3 text-left font-serif text-base' : 'sr-only'}>{caption}</caption>
         {children}
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
 

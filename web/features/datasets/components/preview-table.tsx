@@ -1,7 +1,9 @@
+import { ScrollRegion } from '../../../components/ui/scroll-region';
+
 /** The first rows as the server read them, with the mapped columns highlighted. */
 export function PreviewTable({ header, rows, highlighted }: { header: string[]; rows: string[][]; highlighted: Set<string> }) {
   return (
-    <div className="max-h-80 overflow-auto rounded-md border border-rule">
+    <ScrollRegion label="First rows of the file" className="max-h-80 overflow-auto rounded-md border border-rule">
       <table className="w-full text-xs">
         <caption className="sr-only">First rows of the file</caption>
         <thead className="sticky top-0 bg-paper text-left">
@@ -27,6 +29,6 @@ export function PreviewTable({ header, rows, highlighted }: { header: string[]; 
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }
