@@ -171,4 +171,28 @@ describe('the study editor by keyboard alone', () => {
     expect(stops).toBeGreaterThan(20);
     expect(unseen, unseen.join('\n')).toEqual([]);
   });
+
+  it('moves through a table with Tab and leaves the text with Escape, then Tab', async () => {
+    await page.goto(`${demo.url}/studies/${studyId}`);
+    const text = page.getByRole('textbox', { name: 'Study text' });
+    await text.waitFor();
+    await tabTo(page, text);
+    await page.keyboard.press('Control+Home');
+    await shiftTabTo(page, page.getByRole('toolbar', { name: 'Writing tools' }).getByRole('button', { name: 'Table' }), 4);
+    await page.keyboard.press('Enter');
+    await expect.poll(() => isFocused(text)).toBe(true);
+    await page.keyboard.type('Desk');
+    // Tab stays in the table (the next cell, a new row after the last): that is what it is for here.
+    for (let i = 0; i < 10; i++) await page.keyboard.press('Tab');
+    await page.keyboard.type('Noon');
+    expect(await isFocused(text)).toBe(true);
+    await text.getByRole('cell', { name: 'Noon', exact: true }).waitFor();
+    // The way out is said to screen readers and works.
+    const hint = await text.evaluate((el) => document.getElementById(el.getAttribute('aria-describedby') ?? '')?.textContent ?? '');
+    expect(hint).toContain('Escape, then Tab');
+    await page.keyboard.press('Escape');
+    await page.keyboard.press('Tab');
+    expect(await isFocused(text)).toBe(false);
+    await expectVisibleFocus(page);
+  });
 });

@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useId, useRef, type KeyboardEvent } from 'react';
 import { EditorContent, useEditor, type JSONContent } from '@tiptap/react';
 import { studyExtensions } from '#shared/editor/study-extensions';
 import { EditorToolbar } from './editor-toolbar';
@@ -26,13 +26,26 @@ export function StudyEditor({ initialContent, editable, onChange, onBlur }: Stud
   useEffect(() => {
     handlers.current = { onChange, onBlur };
   }, [onChange, onBlur]);
+  const hintId = useId();
+  // Tab belongs to the text while in a table (next cell) or a list (indent); Escape, then Tab,
+  // lets the browser move focus on, so the text is never a keyboard trap.
+  const leaving = useRef(false);
+  const keyDownCapture = (e: KeyboardEvent) => {
+    if (!(e.target instanceof HTMLElement) || !e.target.classList.contains('ProseMirror')) return;
+    if (e.key === 'Escape') leaving.current = true;
+    else if (e.key === 'Tab' && leaving.current) {
+      leaving.current = false;
+      // Stopped before the editor sees it: the browser's own Tab moves focus out of the text.
+      e.stopPropagation();
+    } else if (e.key !== 'Shift') leaving.current = false;
+  };
   const editor = useEditor({
     extensions: [...studyExtensions({ modelBlock: ModelBlockWithView }), StudyIds],
     content: initialContent,
     editable,
     shouldRerenderOnTransaction: false,
     editorProps: {
-      attributes: { class: 'study-text', 'aria-label': 'Study text', 'aria-multiline': 'true', role: 'textbox' },
+      attributes: { class: 'study-text', 'aria-label': 'Study text', 'aria-multiline': 'true', role: 'textbox', 'aria-describedby': hintId },
     },
     onUpdate: ({ editor: e }) => handlers.current.onChange(e.getJSON()),
     onBlur: () => handlers.current.onBlur(),
@@ -45,7 +58,10 @@ export function StudyEditor({ initialContent, editable, onChange, onBlur }: Stud
       </aside>
       <div className="rounded-lg border border-rule bg-sheet">
         {editable && <EditorToolbar editor={editor} />}
-        <EditorContent editor={editor} className="px-8 py-8 sm:px-12" />
+        <p id={hintId} className="sr-only">
+          In a table Tab moves to the next cell, in a list it indents. Press Escape, then Tab, to leave the text.
+        </p>
+        <EditorContent editor={editor} className="px-8 py-8 sm:px-12" onKeyDownCapture={keyDownCapture} />
       </div>
     </div>
   );
