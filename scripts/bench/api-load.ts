@@ -1,0 +1,88 @@
+/**
+ * API under load: autocannon against the running app (SOJOURN_URL, seeded through DATABASE_URL),
+ * 50 connections, each a signed-in consultant cycling through what the editor does: read a study
+ * (GET /api/studies/:id with its document and stored results, GET the engagement's assumption
+ * register) and compute (POST /api/compute of an M/M/c spec and of a staffing solve). Every request
+ * carries the session cookie and state-changing ones the CSRF header, as the web client sends them.
+ * Targets: >= 1,000 requests/s, p99 < 100 ms, no errors or non-2xx answers.
+ */
+import autocannon from 'autocannon';
+import { CSRF_HEADER, CSRF_HEADER_VALUE } from '../../shared/api-error';
+import { cpus } from 'node:os';
+import { createLoadFixture, STUDY_BLOCKS } from './api-load-fixture';
+import { ownCpuMs, processCpuMs } from './process-cpu';
+import type { BenchRow, BenchSuite } from './types';
+
+export const CONNECTIONS = 50;
+const WARM_UP_S = 5;
+const DURATION_S = Number(process.env.BENCH_API_SECONDS ?? 20);
+
+const RATE_TARGET = 1000;
+const P99_TARGET_MS = 100;
+
+/** A help line at its busiest hour (per hour): 180 calls, 4.5-minute handling. */
+const MMC = { model: 'M/M/c', arrivalRate: 180, serviceRate: 13.33, servers: 16, t: 1 / 3, percentile: 0.9 };
+const STAFFING = { model: 'staffing', arrivalRate: 180, serviceRate: 13.33, criterion: 'serviceLevel', target: 0.8, t: 1 / 3 };
+
+function requests(studyId: number, engagementId: number, cookies: string[]): autocannon.Request[] {
+  let next = 0;
+  // Each request takes the next session, so the 50 connections spread over every signed-in person.
+  const withSession = (req: autocannon.Request): autocannon.Request => ({ ...req, headers: { ...req.headers, cookie: cookies[next++ % cookies.length] } });
+  const post = (body: object): autocannon.Request => ({
+    method: 'POST',
+    path: '/api/compute',
+    headers: { 'content-type': 'application/json', [CSRF_HEADER]: CSRF_HEADER_VALUE },
+    body: JSON.stringify(body),
+    setupRequest: withSession,
+  });
+  return [
+    { method: 'GET', path: `/api/studies/${studyId}`, setupRequest: withSession },
+    { method: 'GET', path: `/api/engagements/${engagementId}/assumptions`, setupRequest: withSession },
+    post(MMC),
+    post(STAFFING),
+  ];
+}
+
+/**
+ * What the cores would serve with nothing else running: their CPU time divided by the CPU time one
+ * request costs the app, MariaDB and the load generator together. Only when this bench started
+ * the app and the database (their pids are known); contention inflates CPU time too, so it errs low.
+ */
+function cpuRow(before: (number | null)[], after: (number | null)[], requests: number): BenchRow[] {
+  if (before.some((v) => v === null) || after.some((v) => v === null) || requests === 0) return [];
+  const [app, db, gen] = after.map((v, i) => (v! - before[i]!) / requests);
+  const rate = (cpus().length * 1000) / (app + db + gen);
+  const what = `requests/s the ${cpus().length} cores would serve alone, from CPU per request (app ${app.toFixed(2)}, MariaDB ${db.toFixed(2)}, autocannon ${gen.toFixed(2)} ms)`;
+  return [{ area: 'api', what, measured: rate, unit: 'req/s', target: `>= ${RATE_TARGET}`, ok: rate >= RATE_TARGET }];
+}
+
+const suite: BenchSuite = async () => {
+  const appUrl = process.env.SOJOURN_URL;
+  const databaseUrl = process.env.DATABASE_URL;
+  if (!appUrl || !databaseUrl) {
+    return [{ area: 'api', what: 'API load: skipped, needs SOJOURN_URL and DATABASE_URL of a running stack (or neither, for a throwaway one)', measured: NaN, unit: '', target: `>= ${RATE_TARGET} req/s`, ok: true }];
+  }
+  const fixture = await createLoadFixture(appUrl, databaseUrl, CONNECTIONS);
+  try {
+    const opts = { url: appUrl, connections: CONNECTIONS, timeout: 10, requests: requests(fixture.studyId, fixture.engagementId, fixture.cookies) };
+    // Warm-up: JIT, the database pool's connections and MariaDB's buffer pool, not counted.
+    await autocannon({ ...opts, duration: WARM_UP_S });
+    const pids = [Number(process.env.BENCH_APP_PID), Number(process.env.BENCH_DB_PID)];
+    const cpu0 = [...pids.map((pid) => (pid ? processCpuMs(pid) : null)), ownCpuMs()];
+    const r = await autocannon({ ...opts, duration: DURATION_S });
+    const cpu1 = [...pids.map((pid) => (pid ? processCpuMs(pid) : null)), ownCpuMs()];
+    const failed = r.errors + r.timeouts + r.non2xx;
+    const setup = `${CONNECTIONS} connections, ${DURATION_S} s, ${fixture.cookies.length} sessions`;
+    const mix = `study GET (${STUDY_BLOCKS} blocks) + register GET + 2 compute POSTs`;
+    return [
+      { area: 'api', what: `requests/s, ${mix}, ${setup}`, measured: r.requests.average, unit: 'req/s', target: `>= ${RATE_TARGET}`, ok: r.requests.average >= RATE_TARGET },
+      { area: 'api', what: `p99 latency (p50 ${r.latency.p50} ms, p97.5 ${r.latency.p97_5} ms, max ${r.latency.max} ms), ${setup}`, measured: r.latency.p99, unit: 'ms', target: `< ${P99_TARGET_MS} ms`, ok: r.latency.p99 < P99_TARGET_MS },
+      ...cpuRow(cpu0, cpu1, r.requests.total),
+      { area: 'api', what: `errors + timeouts + non-2xx of ${r.requests.total} requests (${r.errors} + ${r.timeouts} + ${r.non2xx})`, measured: failed, unit: '', target: '0', ok: failed === 0 },
+    ];
+  } finally {
+    await fixture.cleanup();
+  }
+};
+
+export default suite;
