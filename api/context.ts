@@ -1,5 +1,4 @@
-import session from 'express-session';
-import MySQLStoreFactory from 'express-mysql-session';
+import { createSessionStore } from './auth/session-store';
 import type { Config } from './config';
 import { createDb } from './db/client';
 import { createMailer } from './mail/mailer';
@@ -9,20 +8,7 @@ import { createObjectStorage } from './storage/object-storage';
 /** Everything a request handler needs, built once per process and closed on shutdown. */
 export function createContext(config: Config) {
   const { db, pool } = createDb(config.databaseUrl);
-  const url = new URL(config.databaseUrl);
-  const MySQLStore = MySQLStoreFactory(session);
-  // express-mysql-session bundles its own mysql2, so it gets connection options, not our pool.
-  const sessionStore = new MySQLStore({
-    host: url.hostname,
-    port: Number(url.port || 3306),
-    user: decodeURIComponent(url.username),
-    password: decodeURIComponent(url.password),
-    database: url.pathname.slice(1),
-    createDatabaseTable: false,
-    clearExpired: true,
-    checkExpirationInterval: 15 * 60_000,
-    schema: { tableName: 'sessions', columnNames: { session_id: 'session_id', expires: 'expires', data: 'data' } },
-  });
+  const sessionStore = createSessionStore(config.databaseUrl);
   const storage = createObjectStorage(config.s3);
   const mailer = createMailer(config.smtpUrl, config.mailFrom);
   const outbox = createOutbox(db, mailer);

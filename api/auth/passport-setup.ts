@@ -1,8 +1,10 @@
+import { eq, sql } from 'drizzle-orm';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import type { SessionUser } from '../../shared/schemas/auth';
 import type { Db } from '../db/client';
-import { findUserByEmail, findUserById, toSessionUser } from '../routes/users/user-records';
+import { users } from '../db/schema/index';
+import { findUserByEmail, toSessionUser } from '../routes/users/user-records';
 import { verifyPassword } from './passwords';
 
 /**
@@ -23,9 +25,12 @@ export function configurePassport(db: Db): passport.PassportStatic {
     }),
   );
   p.serializeUser((user, done) => done(null, (user as SessionUser).id));
+  // Runs on every signed-in request: the SQL is built once, not per call.
+  const userById = db.select().from(users).where(eq(users.id, sql.placeholder('id'))).prepare();
   p.deserializeUser((id: number, done) => {
-    findUserById(db, id)
-      .then((u) => done(null, u && u.status === 'active' ? toSessionUser(u) : false))
+    userById
+      .execute({ id })
+      .then(([u]) => done(null, u && u.status === 'active' ? toSessionUser(u) : false))
       .catch(done);
   });
   return p as unknown as passport.PassportStatic;

@@ -2,6 +2,8 @@ import { and, eq, sql } from 'drizzle-orm';
 import type { Assumption, CreateAssumption, MovedNumber, UpdateAssumption } from '../../../shared/schemas/assumptions';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
+import type { Db } from '../../db/client';
+import { preparedPer } from '../../db/prepared';
 import { assumptions, memberships, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http-error';
 import { recordAudit } from '../audit/audit.service';
@@ -30,8 +32,19 @@ const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: nu
   version: a.version,
 });
 
+/** The register is read whenever a study opens in the editor: its SQL is built once (db/prepared.ts). */
+const registerOf = preparedPer((db: Db) =>
+  db
+    .select({ a: assumptions, ownerName: users.name })
+    .from(assumptions)
+    .leftJoin(users, eq(users.id, assumptions.ownerId))
+    .where(eq(assumptions.engagementId, sql.placeholder('engagementId')))
+    .orderBy(assumptions.name)
+    .prepare(),
+);
+
 export async function listAssumptions(ctx: AppContext, engagementId: number): Promise<Assumption[]> {
-  const [rows, counts] = await Promise.all([query(ctx).where(eq(assumptions.engagementId, engagementId)).orderBy(assumptions.name), usageCounts(ctx.db, engagementId)]);
+  const [rows, counts] = await Promise.all([registerOf(ctx.db).execute({ engagementId }), usageCounts(ctx.db, engagementId)]);
   return rows.map((r) => toAssumption(r.a, r.ownerName, counts.get(r.a.id) ?? 0));
 }
 

@@ -1,6 +1,7 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
+import { preparedPer } from '../../db/prepared';
 import { engagements, memberships } from '../../db/schema/index';
 import { notFound } from '../../http-error';
 
@@ -8,16 +9,20 @@ export type EngagementRow = typeof engagements.$inferSelect;
 
 /**
  * The engagement if the user may see it: admins see all, everyone else only where they are
- * members. Non-members get the same 404 as a missing id, so ids reveal nothing.
+ * members. Non-members get the same 404 as a missing id, so ids reveal nothing. One query (the
+ * membership joined in): it runs on nearly every request.
  */
+const engagementWithMembership = preparedPer((db: Db) =>
+  db
+    .select({ engagement: engagements, memberId: memberships.userId })
+    .from(engagements)
+    .leftJoin(memberships, and(eq(memberships.engagementId, engagements.id), eq(memberships.userId, sql.placeholder('userId'))))
+    .where(eq(engagements.id, sql.placeholder('engagementId')))
+    .prepare(),
+);
+
 export async function loadEngagementFor(db: Db, user: SessionUser, engagementId: number): Promise<EngagementRow> {
-  const [row] = await db.select().from(engagements).where(eq(engagements.id, engagementId));
-  if (!row) throw notFound('That engagement');
-  if (user.role === 'admin') return row;
-  const [m] = await db
-    .select({ userId: memberships.userId })
-    .from(memberships)
-    .where(and(eq(memberships.engagementId, engagementId), eq(memberships.userId, user.id)));
-  if (!m) throw notFound('That engagement');
-  return row;
+  const [row] = await engagementWithMembership(db).execute({ userId: user.id, engagementId });
+  if (!row || (user.role !== 'admin' && row.memberId === null)) throw notFound('That engagement');
+  return row.engagement;
 }

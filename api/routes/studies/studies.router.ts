@@ -23,8 +23,8 @@ export function studiesRouter(ctx: AppContext): Router {
     res.status(201).json({ study: await createStudy(ctx, e, parse(createStudySchema, req.body), currentUser(req), req.ip) });
   });
   r.get('/studies/:id', async (req, res) => {
-    const { study: s, engagement: e } = await study(req, 'read');
-    res.json({ study: await describeStudy(ctx, s.id, e) });
+    const loaded = await study(req, 'read');
+    res.json({ study: await describeStudy(ctx, loaded.study.id, loaded.engagement, undefined, loaded) });
   });
   r.put('/studies/:id/document', async (req, res) => {
     const { study: s, engagement: e } = await study(req, 'write');

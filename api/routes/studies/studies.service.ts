@@ -6,7 +6,7 @@ import type { AppContext } from '../../context';
 import { studies, users } from '../../db/schema/index';
 import type { EngagementRow } from '../engagements/engagement-access';
 import { readStudyBlocks } from './block-rows';
-import type { StudyRow } from './study-access';
+import type { LoadedStudy, StudyRow } from './study-access';
 
 const author = alias(users, 'author');
 const editor = alias(users, 'editor');
@@ -38,10 +38,11 @@ export async function listStudies(ctx: AppContext, engagementId: number): Promis
 
 /**
  * A study with its document and the server's results per block. `blocks` may be passed when the
- * caller has just computed them (a save), saving a read.
+ * caller has just computed them (a save), and `loaded` when the caller has just read the study
+ * with loadStudyFor (a read), each saving a query.
  */
-export async function describeStudy(ctx: AppContext, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[]): Promise<StudyDetail> {
-  const [row] = await summaryQuery(ctx).where(eq(studies.id, studyId));
+export async function describeStudy(ctx: AppContext, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[], loaded?: LoadedStudy): Promise<StudyDetail> {
+  const row = loaded ? { s: loaded.study, authorName: loaded.authorName, updatedByName: loaded.updatedByName } : (await summaryQuery(ctx).where(eq(studies.id, studyId)))[0];
   const results = blocks ?? [...(await readStudyBlocks(ctx.db, studyId)).values()].map((b) => b.result);
   return {
     ...toSummary(row!),

@@ -1,12 +1,24 @@
-import { eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/mysql-core';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { Db } from '../../db/client';
-import { studies } from '../../db/schema/index';
-import { forbidden, HttpError, notFound } from '../../http-error';
+import { preparedPer } from '../../db/prepared';
+import { engagements, memberships, studies, users } from '../../db/schema/index';
+import { forbidden, notFound } from '../../http-error';
 import { loadEngagementFor, type EngagementRow } from '../engagements/engagement-access';
 
 export type StudyRow = typeof studies.$inferSelect;
 export type Access = 'read' | 'write';
+/** A study as its summary shows it: the row with its author's and last editor's names. */
+export interface LoadedStudy {
+  study: StudyRow;
+  engagement: EngagementRow;
+  authorName: string | null;
+  updatedByName: string | null;
+}
+
+const author = alias(users, 'author');
+const editor = alias(users, 'editor');
 
 /**
  * Role gate for studies, assumptions and templates: clients never (they see released
@@ -24,15 +36,26 @@ export async function loadEngagementForStudies(db: Db, user: SessionUser, engage
   return loadEngagementFor(db, user, engagementId);
 }
 
-/** A study and its engagement; a study of an engagement the user is not in is a 404 like a missing one. */
-export async function loadStudyFor(db: Db, user: SessionUser, studyId: number, access: Access): Promise<{ study: StudyRow; engagement: EngagementRow }> {
+const studyWithAccess = preparedPer((db: Db) =>
+  db
+    .select({ study: studies, engagement: engagements, memberId: memberships.userId, authorName: author.name, updatedByName: editor.name })
+    .from(studies)
+    .innerJoin(engagements, eq(engagements.id, studies.engagementId))
+    .leftJoin(memberships, and(eq(memberships.engagementId, studies.engagementId), eq(memberships.userId, sql.placeholder('userId'))))
+    .leftJoin(author, eq(author.id, studies.createdBy))
+    .leftJoin(editor, eq(editor.id, studies.updatedBy))
+    .where(eq(studies.id, sql.placeholder('studyId')))
+    .prepare(),
+);
+
+/**
+ * A study and its engagement; a study of an engagement the user is not in is a 404 like a missing
+ * one. One query (engagement, membership and the two names joined in): every read and save of a
+ * study runs it, and a read then needs no second look at the study row.
+ */
+export async function loadStudyFor(db: Db, user: SessionUser, studyId: number, access: Access): Promise<LoadedStudy> {
   assertStudyRole(user, access);
-  const [study] = await db.select().from(studies).where(eq(studies.id, studyId));
-  if (!study) throw notFound('That study');
-  try {
-    return { study, engagement: await loadEngagementFor(db, user, study.engagementId) };
-  } catch (err) {
-    if (err instanceof HttpError && err.status === 404) throw notFound('That study');
-    throw err;
-  }
+  const [row] = await studyWithAccess(db).execute({ userId: user.id, studyId });
+  if (!row || (user.role !== 'admin' && row.memberId === null)) throw notFound('That study');
+  return { study: row.study, engagement: row.engagement, authorName: row.authorName, updatedByName: row.updatedByName };
 }
