@@ -21,6 +21,18 @@ export function ReleasePanel({ revision }: { revision: RevisionDetail }) {
       </Banner>
     );
   }
+  // Started elsewhere (another tab, another partner) or by a server that has since stopped: the
+  // revision query polls until the server records the outcome, interrupted ones included.
+  if (info?.status === 'releasing' && !release.isPending) {
+    return (
+      <Banner tone="info" title="Being released">
+        <span role="status">
+          The PDF is being rendered, signed and stored. If the server stopped on the way, the release is recorded as interrupted within about a minute and
+          can be tried again.
+        </span>
+      </Banner>
+    );
+  }
   if (!revision.canRelease) {
     return (
       <Banner tone="info" title="Signed off, waiting to be released">
@@ -44,6 +56,8 @@ export function ReleasePanel({ revision }: { revision: RevisionDetail }) {
         <div className="mt-3">
           <Banner tone="danger" title="The release did not complete">
             <p>{release.error?.message ?? info?.lastError ?? 'The server gave no reason.'}</p>
+            {/* The request may have died with its server; the reason recorded afterwards ("Interrupted: …") tells what happened. */}
+            {release.error && failedBefore && info?.lastError && !release.error.message.includes(info.lastError) && <p className="mt-1">The server recorded: {info.lastError}</p>}
             {info && info.attempts > 0 && <p className="mt-1 text-xs">Attempts so far: {info.attempts}</p>}
           </Banner>
         </div>
