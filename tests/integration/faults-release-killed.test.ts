@@ -10,18 +10,20 @@ import { HeadObjectCommand } from '@aws-sdk/client-s3';
 import { and, eq, like } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditEntries, mailOutbox, releases, revisions, studies } from '../../api/db/schema/index';
-import { INTERRUPTED_REASON } from '../../api/routes/revisions/release-sweeper';
+import { loadConfig } from '../../api/config';
+import { INTERRUPTED_REASON, sweepInterruptedReleases } from '../../api/routes/revisions/release-sweeper';
 import { httpSession } from './support/http-session';
 import { mailFor } from './support/mailbox';
 import { approvedRevision, mailArrives, reviewCast, savedStudy, type ReviewCast } from './support/revision-setup';
 import { startServerProcess, type ServerProcess } from './support/server-process';
 import { silentStorage, type BrokenStorage } from './support/storage-outages';
-import { PASSWORD, startTestApp, type TestApp } from './support/test-app';
+import { PASSWORD, signedIn, startTestApp, type TestApp } from './support/test-app';
 
 let t: TestApp;
 let c: ReviewCast;
 let hung: BrokenStorage;
 const servers: ServerProcess[] = [];
+const apps: TestApp[] = [];
 const title = 'Ferry terminal, interrupted release';
 
 beforeAll(async () => {
@@ -31,6 +33,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   for (const s of servers) await s.stop();
+  for (const a of apps) await a.close();
   await hung.close();
   await t.close();
 });
@@ -129,5 +132,35 @@ describe('the server killed in the middle of a release', () => {
     await new Promise((r) => setTimeout(r, 2_500));
     expect((await mailFor(c.emails.client)).filter((m) => m.subject === subject)).toHaveLength(1);
     expect((await mailFor(c.emails.consultant)).filter((m) => m.subject === subject)).toHaveLength(1);
+  });
+});
+
+describe('a release that is slow but alive', () => {
+  it('keeps its claim past the lease by renewing it, and writes nothing once the claim is lost', { timeout: 60_000 }, async () => {
+    const study = await savedStudy(c.consultant, c.engagementId, 'Ferry terminal, slow store');
+    const id = await approvedRevision(c, study.id);
+    const key = `engagements/${c.engagementId}/studies/${study.id}/revisions/1.pdf`;
+    // A 600 ms lease renewed every 200 ms, and a store that takes the upload and never answers.
+    const slow = startTestApp({ releaseLeaseMs: 600, s3: { ...loadConfig().s3, endpoint: hung.endpoint } });
+    apps.push(slow);
+    const partner = await signedIn(slow.app, c.emails.otherPartner);
+    const answer = partner.post(`/api/revisions/${id}/release`).then((r) => r);
+    await hung.received(`PUT /${t.ctx.storage.bucket}/${key}`);
+
+    // Three lease lengths later the claim is still held, so a sweep leaves it alone.
+    await new Promise((r) => setTimeout(r, 1_800));
+    expect(await sweepInterruptedReleases(t.ctx)).toBe(0);
+    expect((await state(id)).rel).toMatchObject({ status: 'releasing', attempts: 1 });
+
+    // As if the process stalled past its lease: the sweep records it interrupted, the next renewal
+    // finds the claim gone and aborts the upload, and the attempt writes nothing of its own.
+    await t.ctx.db.update(releases).set({ leaseUntil: new Date(Date.now() - 1_000) }).where(eq(releases.revisionId, id));
+    expect(await sweepInterruptedReleases(t.ctx)).toBe(1);
+    const res = await answer;
+    expect(res.status).toBe(503);
+    expect(res.body.error.message).toMatch(/lost its claim/);
+    const s = await state(id);
+    expectConsistent(s);
+    expect(s.rel).toMatchObject({ status: 'failed', attempts: 1, lastError: INTERRUPTED_REASON });
   });
 });

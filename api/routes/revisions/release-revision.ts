@@ -65,7 +65,9 @@ export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: 
     );
   } catch (err) {
     lease.release();
-    const reason = `${(err as Error).name === 'Error' ? '' : `${(err as Error).name}: `}${(err as Error).message || 'unknown error'}`;
+    // A lost claim aborts the upload; the SDK then reports only "Request aborted", so say why.
+    const cause = (lease.signal.aborted ? lease.signal.reason : err) as Error;
+    const reason = `${cause.name === 'Error' ? '' : `${cause.name}: `}${cause.message || 'unknown error'}`;
     await failRelease(ctx, revision.id, attempt, reason);
     await recordAudit(ctx.db, { action: 'release_failed', actor: by, engagementId: rc.engagement.id, subject: `${rc.study.title}, revision ${revision.number}`, detail: { revisionId: revision.id, attempt, reason }, ip });
     throw new HttpError(503, 'release_failed', `The signed PDF could not be stored (${reason}). The release was recorded as failed; revision ${revision.number} stays approved and can be released again.`);
