@@ -74,6 +74,9 @@ const screens: Screen[] = [
     await p.getByRole('textbox', { name: 'Study text' }).waitFor();
     await p.locator('section.model-block table').first().waitFor();
     await p.locator('section.model-block figure svg').first().waitFor();
+    // A chart is one described picture: vega's container carries the words, not each mark.
+    const chart = p.locator('section.model-block figure [role="graphics-document"]').first();
+    expect(await chart.getAttribute('aria-label')).toMatch(/\w+/);
   } },
   { name: 'study editor, block settings open', who: 'consultant', path: (f) => `/studies/${f.studyId}`, ready: (p) => p.locator('section.model-block table').first().waitFor(), act: async (p) => {
     await p.getByRole('button', { name: 'Edit block' }).first().click();

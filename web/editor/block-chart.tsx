@@ -1,5 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
 import type { TimeUnit } from '#shared/units/units';
+import { ScrollRegion } from '../components/ui/scroll-region';
+import { accessibleChart } from '../lib/accessible-chart';
 import { chartSpec, type ChartRow } from './chart-spec';
 
 interface BlockChartProps {
@@ -23,7 +25,7 @@ export function BlockChart({ rows, model, parameter, parameterLabel, timeUnit, c
   const [failure, setFailure] = useState<string | null>(null);
 
   // Redraw only when what is drawn changes (callers may pass a new but equal array each render).
-  const specText = JSON.stringify(chartSpec(rows, { model, parameter, parameterLabel, timeUnit, criterion, width: 520 }));
+  const specText = JSON.stringify(accessibleChart(chartSpec(rows, { model, parameter, parameterLabel, timeUnit, criterion, width: 520 }), description));
 
   useEffect(() => {
     const el = box.current;
@@ -49,7 +51,9 @@ export function BlockChart({ rows, model, parameter, parameterLabel, timeUnit, c
 
   return (
     <figure className="mt-4">
-      <div ref={box} role="img" aria-label={description} className="min-h-24 overflow-x-auto" />
+      <ScrollRegion label="Chart (scrolls sideways)" className="overflow-x-auto">
+        <div ref={box} role="img" aria-label={description} className="min-h-24" />
+      </ScrollRegion>
       {failure && <p className="text-sm text-danger">The chart could not be drawn: {failure}</p>}
     </figure>
   );

@@ -1,4 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
+import { ScrollRegion } from '../../../components/ui/scroll-region';
+import { accessibleChart } from '../../../lib/accessible-chart';
 
 /**
  * Draws a vega-lite spec. vega-embed is imported only when a chart is on screen; the expression
@@ -7,7 +9,7 @@ import { useEffect, useRef, useState } from 'react';
 export function VegaFigure({ spec, description, caption }: { spec: object; description: string; caption?: string }) {
   const box = useRef<HTMLDivElement>(null);
   const [failure, setFailure] = useState<string | null>(null);
-  const specText = JSON.stringify(spec);
+  const specText = JSON.stringify(accessibleChart(spec, description));
   useEffect(() => {
     const el = box.current;
     if (!el) return;
@@ -27,7 +29,9 @@ export function VegaFigure({ spec, description, caption }: { spec: object; descr
   }, [specText]);
   return (
     <figure>
-      <div ref={box} role="img" aria-label={description} className="min-h-24 overflow-x-auto" />
+      <ScrollRegion label="Chart (scrolls sideways)" className="overflow-x-auto">
+        <div ref={box} role="img" aria-label={description} className="min-h-24" />
+      </ScrollRegion>
       {caption && <figcaption className="mt-1 text-xs text-ink-faint">{caption}</figcaption>}
       {failure && <p className="text-sm text-danger">The chart could not be drawn: {failure}</p>}
     </figure>
