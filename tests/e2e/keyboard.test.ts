@@ -116,6 +116,13 @@ describe('the study editor by keyboard alone', () => {
     const optionServers = settings.getByLabel('Servers c, Option A');
     await shiftTabTo(page, optionServers, 12);
     await page.keyboard.type('11');
+
+    // A chart over one input: a checkbox, ticked with Space.
+    const chartBox = settings.getByLabel('Draw a chart over one input');
+    await tabTo(page, chartBox, 30);
+    await expectVisibleFocus(page);
+    await page.keyboard.press('Space');
+    await expect.poll(() => chartBox.isChecked()).toBe(true);
     await screenshot(page, 'keyboard-block-settings');
 
     // Escape closes the settings and puts focus back on the block's button.
@@ -129,6 +136,7 @@ describe('the study editor by keyboard alone', () => {
     const results = block.getByRole('table', { name: blockTitle });
     await expect.poll(() => cell(results, 'Utilisation ρ', 1), { timeout: 15_000 }).toBe('80.0');
     await expect.poll(() => cell(results, 'Utilisation ρ', 2)).toBe('72.7');
+    await block.locator('figure [role="graphics-document"][aria-label]').waitFor();
     await screenshot(page, 'keyboard-block-results');
 
     // Enter on the button opens the settings again; Escape closes them.
@@ -194,5 +202,30 @@ describe('the study editor by keyboard alone', () => {
     await page.keyboard.press('Tab');
     expect(await isFocused(text)).toBe(false);
     await expectVisibleFocus(page);
+  });
+
+  it('submits for review from a confirmation dialog that holds focus and gives it back', async () => {
+    await page.goto(`${demo.url}/studies/${studyId}`);
+    await page.getByRole('textbox', { name: 'Study text' }).waitFor();
+    const submit = page.getByRole('button', { name: 'Submit for review' });
+    await tabTo(page, submit, 10);
+    await page.keyboard.press('Enter');
+    const dialog = page.getByRole('dialog', { name: 'Submit as revision 1?' });
+    await dialog.waitFor();
+    expect(await dialog.evaluate((el) => el.contains(document.activeElement))).toBe(true);
+    // Escape closes it and focus is back where the person was.
+    await page.keyboard.press('Escape');
+    await expect.poll(() => dialog.count()).toBe(0);
+    await expect.poll(() => isFocused(submit)).toBe(true);
+    // Again, this time confirming with the keyboard.
+    await page.keyboard.press('Enter');
+    await dialog.waitFor();
+    await tabTo(page, dialog.getByRole('button', { name: 'Submit revision 1' }), 6);
+    await page.keyboard.press('Enter');
+    const done = page.getByRole('dialog', { name: 'Revision 1 submitted' });
+    await done.waitFor();
+    await expect.poll(() => isFocused(done.getByRole('button', { name: 'Close' }))).toBe(true);
+    await page.keyboard.press('Enter');
+    await expect.poll(() => done.count()).toBe(0);
   });
 });
