@@ -25,11 +25,16 @@ export interface BenchTarget {
   stop(): Promise<void>;
 }
 
-/** The app as a production process: built web app, NODE_ENV=production, its own port. */
+/**
+ * The app as in production: built web app, NODE_ENV=production, its own port; one process
+ * (`npm run serve`) unless BENCH_API_PROCESSES asks for several sharing the port.
+ */
 async function startApp(env: NodeJS.ProcessEnv, log: (s: string) => void): Promise<{ url: string; child: ChildProcess }> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', join(root, 'api/server.ts')], {
+  const processes = Number(env.BENCH_API_PROCESSES ?? 1);
+  const entry = processes > 1 ? join(root, 'scripts/bench/app-cluster.ts') : join(root, 'api/server.ts');
+  const child = spawn(process.execPath, ['--import', 'tsx', entry], {
     cwd: root,
     env: { ...env, PORT: String(port), PUBLIC_URL: url, NODE_ENV: 'production', WEB_DIST: buildWebIfStale(root, log) },
     stdio: ['ignore', 'ignore', 'inherit'],
@@ -88,7 +93,9 @@ export async function provideRunningApp(log: (s: string) => void): Promise<Bench
     process.env.BENCH_APP_PID = String(started.child.pid);
     if (stack) process.env.BENCH_DB_PID = readFileSync(join(dataDir, 'run', 'mariadb.pid'), 'utf8').trim();
     log(`App process on ${started.url}${external ? ' against DATABASE_URL' : ''}.`);
-    return { describe: external ? 'an app process against DATABASE_URL' : 'a throwaway stack (private MariaDB, app child process, NODE_ENV=production)', stop };
+    const count = Number(process.env.BENCH_API_PROCESSES ?? 1);
+    const processes = `${count} API process${count > 1 ? 'es' : ''}`;
+    return { describe: external ? `${processes} against DATABASE_URL` : `a throwaway stack (private MariaDB, ${processes}, NODE_ENV=production)`, stop };
   } catch (err) {
     await stop();
     throw err;
