@@ -68,6 +68,14 @@ describe('the study editor by keyboard alone', () => {
     const insert = page.getByRole('button', { name: 'Insert model block' });
     await shiftTabTo(page, insert, 3);
     await expectVisibleFocus(page);
+    // Within the tools the arrow keys move too, and wrap around.
+    const tools = page.getByRole('toolbar', { name: 'Writing tools' });
+    await page.keyboard.press('ArrowLeft');
+    await expect.poll(() => isFocused(tools.getByRole('button', { name: 'Link', exact: true }))).toBe(true);
+    await page.keyboard.press('Home');
+    await expect.poll(() => isFocused(tools.getByRole('button', { name: 'Section', exact: true }))).toBe(true);
+    await page.keyboard.press('ArrowLeft');
+    await expect.poll(() => isFocused(insert)).toBe(true);
     await page.keyboard.press('Enter');
     const settings = page.getByRole('group', { name: 'Block settings' });
     await settings.waitFor();

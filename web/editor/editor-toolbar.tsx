@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type KeyboardEvent } from 'react';
 import { useEditorState, type Editor } from '@tiptap/react';
 import { inputClass } from '../components/ui/field';
 import { blockForModel, newBlockId } from './block-defaults';
@@ -17,6 +17,18 @@ function ToolButton({ label, active, onClick, disabled }: { label: string; activ
       {label}
     </button>
   );
+}
+
+/** Arrow keys, Home and End move between the tools, as a toolbar is expected to; Tab still stops on each. */
+function moveAlongToolbar(e: KeyboardEvent<HTMLDivElement>) {
+  const step = { ArrowRight: 1, ArrowLeft: -1 }[e.key];
+  if (step === undefined && e.key !== 'Home' && e.key !== 'End') return;
+  if (!(e.target instanceof HTMLButtonElement)) return; // typing in the link box keeps its keys
+  const tools = Array.from(e.currentTarget.querySelectorAll<HTMLButtonElement>('button:not(:disabled)'));
+  const at = tools.indexOf(e.target);
+  const next = e.key === 'Home' ? 0 : e.key === 'End' ? tools.length - 1 : (at + (step ?? 0) + tools.length) % tools.length;
+  e.preventDefault();
+  tools[next]?.focus();
 }
 
 /** Writing tools above the study: headings, emphasis, lists, tables, links and model blocks. */
@@ -51,7 +63,7 @@ export function EditorToolbar({ editor }: { editor: Editor }) {
   };
 
   return (
-    <div role="toolbar" aria-label="Writing tools" className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-sheet/95 px-3 py-2 font-sans backdrop-blur">
+    <div role="toolbar" aria-label="Writing tools" onKeyDown={moveAlongToolbar} className="sticky top-0 z-10 flex flex-wrap items-center gap-1 border-b border-rule bg-sheet/95 px-3 py-2 font-sans backdrop-blur">
       <ToolButton label="Section" active={state.h1} onClick={() => chain().toggleHeading({ level: 1 }).run()} />
       <ToolButton label="Subsection" active={state.h2} onClick={() => chain().toggleHeading({ level: 2 }).run()} />
       <span aria-hidden className="mx-1 h-5 w-px bg-rule" />
