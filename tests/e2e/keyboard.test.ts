@@ -236,4 +236,24 @@ describe('the study editor by keyboard alone', () => {
     await page.keyboard.press('Enter');
     await expect.poll(() => done.count()).toBe(0);
   });
+
+  it('lets the partner comment on the block of the submitted revision by keyboard', async () => {
+    const partner = await signedInPage(browser, 'partner');
+    const { revisions } = (await (await partner.request.get(`${demo.url}/api/studies/${studyId}/revisions`)).json()) as { revisions: { id: number }[] };
+    await partner.goto(`${demo.url}/revisions/${revisions[0]!.id}`);
+    const toggle = partner.getByRole('button', { name: `Comment on model block ${blockTitle}` });
+    await toggle.waitFor();
+    await tabTo(partner, toggle, 60);
+    await expectVisibleFocus(partner);
+    await partner.keyboard.press('Enter');
+    const box = partner.getByLabel(`New comment on model block ${blockTitle}`);
+    await expect.poll(() => isFocused(box)).toBe(true);
+    const comment = `Check the noon arrivals against March ${stamp}.`;
+    await partner.keyboard.type(comment);
+    await tabTo(partner, partner.getByRole('region', { name: `Comments on model block ${blockTitle}` }).getByRole('button', { name: 'Add comment' }), 3);
+    await partner.keyboard.press('Enter');
+    await partner.getByRole('region', { name: `Comments on model block ${blockTitle}` }).getByText(comment).waitFor();
+    await screenshot(partner, 'keyboard-block-comment');
+    await partner.context().close();
+  });
 });
