@@ -2,6 +2,7 @@ import { and, eq, isNull, lt, or } from 'drizzle-orm';
 import type { AppContext } from '../../context';
 import { releases, revisions, studies } from '../../db/schema/index';
 import { recordAudit } from '../audit/audit.service';
+import { isHeldHere } from './release-lease';
 
 /** What the partner reads on the revision after a process died in the middle of its release. */
 export const INTERRUPTED_REASON = 'Interrupted: the server stopped before the signed PDF was stored. Nothing was sent to the client; release again.';
@@ -13,9 +14,10 @@ export const INTERRUPTED_REASON = 'Interrupted: the server stopped before the si
  * queued (the release mails are queued in the same transaction that marks it released), so the
  * partner simply releases again. Each update is fenced by the attempt number and the expired
  * lease, so a claim renewed or retaken in the meantime is left alone, and several processes may
- * sweep at once. Returns how many releases it marked.
+ * sweep at once. Attempts this process is still working on are skipped (they are alive, only
+ * late in renewing); `asAnotherProcess` drops that knowledge, for tests. Returns how many it marked.
  */
-export async function sweepInterruptedReleases(ctx: AppContext): Promise<number> {
+export async function sweepInterruptedReleases(ctx: AppContext, opts: { asAnotherProcess?: boolean } = {}): Promise<number> {
   const now = new Date();
   const expired = and(eq(releases.status, 'releasing'), or(isNull(releases.leaseUntil), lt(releases.leaseUntil, now)));
   const rows = await ctx.db
@@ -26,6 +28,7 @@ export async function sweepInterruptedReleases(ctx: AppContext): Promise<number>
     .where(expired);
   let marked = 0;
   for (const row of rows) {
+    if (!opts.asAnotherProcess && isHeldHere(row.revisionId, row.attempts)) continue;
     const [res] = await ctx.db
       .update(releases)
       .set({ status: 'failed', lastError: INTERRUPTED_REASON, leaseUntil: null, updatedAt: now })
