@@ -67,7 +67,7 @@ export function createApp(ctx: AppContext): Express {
       cookie: { httpOnly: true, sameSite: 'lax', secure: ctx.config.cookieSecure, maxAge: 12 * 3600_000 },
     }),
   );
-  const passport = configurePassport(ctx.db);
+  const passport = configurePassport(ctx.db, ctx.sessionStore);
   api.use(passport.initialize());
   api.use(passport.session());
   api.use(csrfGuard(ctx.config.publicUrl));

@@ -6,7 +6,7 @@ import { users } from '../../db/schema/index';
 
 export type UserRow = typeof users.$inferSelect;
 
-export const toSessionUser = (u: UserRow): SessionUser => ({ id: u.id, email: u.email, name: u.name, role: u.role });
+export const toSessionUser = (u: Pick<UserRow, 'id' | 'email' | 'name' | 'role'>): SessionUser => ({ id: u.id, email: u.email, name: u.name, role: u.role });
 
 export const toUser = (u: UserRow): User => ({
   id: u.id,
