@@ -2,12 +2,12 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import express, { type Express } from 'express';
 import session from 'express-session';
-import helmet from 'helmet';
 import { configurePassport } from './auth/passport-setup';
 import type { AppContext } from './context';
 import { HttpError } from './http-error';
 import { csrfGuard } from './middleware/csrf';
 import { errorHandler } from './middleware/error-handler';
+import { securityHeaders } from './middleware/security-headers';
 import { assumptionsRouter } from './routes/assumptions/assumptions.router';
 import { auditRouter } from './routes/audit/audit.router';
 import { authRouter } from './routes/auth/auth.router';
@@ -30,9 +30,11 @@ export const SESSION_COOKIE = 'sojourn.sid';
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
+  // API answers are no-store, so an ETag (a SHA-1 of every body) would never be used.
+  app.set('etag', false);
   if (ctx.config.trustProxy) app.set('trust proxy', 1);
   app.use(
-    helmet({
+    securityHeaders({
       contentSecurityPolicy: {
         directives: {
           defaultSrc: ["'self'"],

@@ -42,6 +42,8 @@ export interface Config {
   /** HTTP address of the local SMTP fake's mailbox; null in production (the mailbox page is then off). */
   mailFakeUrl: string | null;
   signInLimit: { windowMs: number; perAccount: number; perAddress: number };
+  /** How long each process may reuse a session it read (ms); see api/auth/session-store.ts. */
+  sessionCacheMs: number;
   /** Where the built web app lives; null when the API runs alone (tests, dev with Vite). */
   webDist: string | null;
 }
@@ -93,6 +95,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       perAccount: int(env.SIGN_IN_LIMIT_PER_ACCOUNT, 5),
       perAddress: int(env.SIGN_IN_LIMIT_PER_ADDRESS, 100),
     },
+    sessionCacheMs: Math.max(int(env.SESSION_CACHE_MS, 1_000), 0),
     webDist: env.WEB_DIST || null,
   };
 }

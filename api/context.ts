@@ -8,7 +8,7 @@ import { createObjectStorage } from './storage/object-storage';
 /** Everything a request handler needs, built once per process and closed on shutdown. */
 export function createContext(config: Config) {
   const { db, pool } = createDb(config.databaseUrl);
-  const sessionStore = createSessionStore(config.databaseUrl, db);
+  const sessionStore = createSessionStore(config.databaseUrl, db, config.sessionCacheMs);
   const storage = createObjectStorage(config.s3);
   const mailer = createMailer(config.smtpUrl, config.mailFrom);
   const outbox = createOutbox(db, mailer);

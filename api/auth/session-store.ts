@@ -17,9 +17,11 @@ export type SignedInUser = Pick<typeof users.$inferSelect, 'id' | 'email' | 'nam
 export type SessionStore = InstanceType<ReturnType<typeof MySQLStoreFactory>> & {
   /** The user row read with this session's data on this request (once), for passport's deserializer. */
   takeUser(sid: string): SignedInUser | undefined;
+  /** Drops this person's cached sessions, after a change of role or status in this process. */
+  forgetUser(userId: number): void;
 };
 
-export function createSessionStore(databaseUrl: string, db: Db): SessionStore {
+export function createSessionStore(databaseUrl: string, db: Db, cacheMs = 0): SessionStore {
   const url = new URL(databaseUrl);
   const MySQLStore = MySQLStoreFactory(session);
   // express-mysql-session bundles its own mysql2, so it gets connection options, not our pool.
@@ -64,15 +66,24 @@ export function createSessionStore(databaseUrl: string, db: Db): SessionStore {
     .where(eq(sessions.sessionId, sql.placeholder('sid')))
     .prepare();
   const readUsers = new Map<string, SignedInUser>();
+  const cache = new SessionReadCache(cacheMs);
   const get = async (sid: string): Promise<session.SessionData | null> => {
-    const [row] = await withUser.execute({ sid });
     readUsers.delete(sid);
+    const row = cache.get(sid) ?? cache.put(sid, (await withUser.execute({ sid }))[0]);
     if (!row || row.expires < Math.round(Date.now() / 1000) || row.data === null) return null;
     // Bounded: an entry lives from here to the deserializer of the same request.
     if (readUsers.size > 10_000) readUsers.clear();
     if (row.user) readUsers.set(sid, row.user);
+    // Parsed afresh each time: express-session mutates the object it is given.
     return JSON.parse(row.data) as session.SessionData;
   };
+  for (const name of ['set', 'destroy'] as const) {
+    const original = store[name].bind(store) as (sid: string, ...rest: unknown[]) => unknown;
+    (store as unknown as Record<string, unknown>)[name] = (sid: string, ...rest: unknown[]) => {
+      cache.forget(sid);
+      return original(sid, ...rest);
+    };
+  }
   store.get = ((sid: string, callback?: (err: unknown, data?: session.SessionData | null) => void) => {
     const read = get(sid);
     if (callback) read.then((data) => callback(null, data), callback);
@@ -84,5 +95,45 @@ export function createSessionStore(databaseUrl: string, db: Db): SessionStore {
       readUsers.delete(sid);
       return user;
     },
+    forgetUser: (userId: number) => cache.forgetUser(userId),
   });
+}
+
+interface SessionRow {
+  data: string | null;
+  expires: number;
+  user: SignedInUser | null;
+}
+
+/**
+ * Under load most of a small request's cost is reading its session and user. Each process keeps
+ * what it read for `ms` (SESSION_CACHE_MS, default 1 s; 0 turns it off). Signing out, a new
+ * session and a change to a person in this process drop the entry at once; another process sees
+ * such a change within `ms` at most, the same order as a request already in flight.
+ */
+class SessionReadCache {
+  private readonly rows = new Map<string, { row: SessionRow | undefined; until: number }>();
+  constructor(private readonly ms: number) {}
+
+  get(sid: string): SessionRow | undefined {
+    const hit = this.rows.get(sid);
+    if (!hit || hit.until <= Date.now() || !hit.row) return undefined;
+    return hit.row;
+  }
+
+  put(sid: string, row: SessionRow | undefined): SessionRow | undefined {
+    if (this.ms <= 0 || !row) return row;
+    const now = Date.now();
+    if (this.rows.size >= 10_000) for (const [k, v] of this.rows) if (v.until <= now) this.rows.delete(k);
+    if (this.rows.size < 10_000) this.rows.set(sid, { row, until: now + this.ms });
+    return row;
+  }
+
+  forget(sid: string): void {
+    this.rows.delete(sid);
+  }
+
+  forgetUser(userId: number): void {
+    for (const [k, v] of this.rows) if (v.row?.user?.id === userId) this.rows.delete(k);
+  }
 }

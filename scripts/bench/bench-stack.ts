@@ -16,6 +16,7 @@ import { bootStack, type Stack } from '../stack/boot-stack';
 import { freePort } from '../stack/ports';
 import { waitForHttp } from '../stack/wait-http';
 import { buildWebIfStale } from '../stack/web-build';
+import { SERVER_NODE_ARGS } from '../stack/server-args';
 
 const root = resolve(import.meta.dirname, '../..');
 
@@ -34,7 +35,9 @@ async function startApp(env: NodeJS.ProcessEnv, log: (s: string) => void): Promi
   const url = `http://127.0.0.1:${port}`;
   const processes = Number(env.BENCH_API_PROCESSES ?? 1);
   const entry = processes > 1 ? join(root, 'scripts/bench/app-cluster.ts') : join(root, 'api/server.ts');
-  const child = spawn(process.execPath, ['--import', 'tsx', entry], {
+  // BENCH_API_NODE_ARGS passes flags to the app's node, e.g. "--cpu-prof --cpu-prof-dir=/tmp/prof".
+  const nodeArgs = (env.BENCH_API_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child = spawn(process.execPath, [...nodeArgs, ...SERVER_NODE_ARGS, entry], {
     cwd: root,
     env: { ...env, PORT: String(port), PUBLIC_URL: url, NODE_ENV: 'production', WEB_DIST: buildWebIfStale(root, log) },
     stdio: ['ignore', 'ignore', 'inherit'],

@@ -10,6 +10,7 @@ import { assertPortFree } from './ports';
 import { localSecrets } from './secrets';
 import { buildWebIfStale } from './web-build';
 import { waitForHttp } from './wait-http';
+import { SERVER_NODE_ARGS } from './server-args';
 
 const root = resolve(import.meta.dirname, '../..');
 const env = process.env;
@@ -39,7 +40,7 @@ try {
   const webDist = dev ? '' : buildWebIfStale(root, log);
   const publicUrl = env.PUBLIC_URL ?? `http://localhost:${dev ? 5173 : port}`;
   const serverEnv = { ...env, ...stack.env, PORT: String(port), PUBLIC_URL: publicUrl, SESSION_SECRET: secrets.sessionSecret, WEB_DIST: webDist };
-  const api = spawn(process.execPath, ['--import', 'tsx', ...(dev ? ['watch'] : []), join(root, 'api/server.ts')], {
+  const api = spawn(process.execPath, [...SERVER_NODE_ARGS, ...(dev ? ['watch'] : []), join(root, 'api/server.ts')], {
     cwd: root,
     env: serverEnv,
     stdio: 'inherit',

@@ -10,6 +10,7 @@ import { aptInstall } from './mariadb';
 import { freePort } from './ports';
 import { buildWebIfStale } from './web-build';
 import { waitForHttp } from './wait-http';
+import { SERVER_NODE_ARGS } from './server-args';
 
 const root = resolve(import.meta.dirname, '../..');
 const log = (s: string): void => console.log(`[test] ${s}`);
@@ -74,7 +75,7 @@ try {
     TEST_DATA_DIR: dataDir,
     NODE_ENV: 'test',
   };
-  server = spawn(process.execPath, ['--import', 'tsx', join(root, 'api/server.ts')], {
+  server = spawn(process.execPath, [...SERVER_NODE_ARGS, join(root, 'api/server.ts')], {
     cwd: root,
     env: { ...env, PORT: String(appPort), WEB_DIST: webDist },
     stdio: ['ignore', 'ignore', 'inherit'],

@@ -30,7 +30,9 @@ beforeAll(async () => {
   } finally {
     await pool.end();
   }
-  server = await startServerProcess({ DATABASE_URL: maria.url });
+  // No session cache: each request must reach MariaDB, so the outage shows on every route at once
+  // (with the default 1 s cache, /api/auth/me could still answer from memory just after the stop).
+  server = await startServerProcess({ DATABASE_URL: maria.url, SESSION_CACHE_MS: '0' });
   partner = httpSession(server.url);
   await partner.signIn(email, PASSWORD);
 }, 120_000);

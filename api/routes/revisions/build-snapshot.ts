@@ -4,7 +4,7 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 import type { FrozenAssumption, RevisionSnapshot } from '../../../shared/schemas/revisions';
 import { assumptions, users } from '../../db/schema/index';
 import type { EngagementRow } from '../engagements/engagement-access';
-import { readStudyBlocks, type Tx } from '../studies/block-rows';
+import { readStudyBlockResults, type Tx } from '../studies/block-rows';
 import type { StudyRow } from '../studies/study-access';
 
 /**
@@ -14,7 +14,7 @@ import type { StudyRow } from '../studies/study-access';
  * The result goes through JSON once, so the hash taken now equals the hash of what is read back.
  */
 export async function buildSnapshot(tx: Tx, study: StudyRow, engagement: EngagementRow, number: number, by: SessionUser, at: Date): Promise<RevisionSnapshot> {
-  const blocks = [...(await readStudyBlocks(tx, study.id)).values()].map((b) => b.result);
+  const blocks = await readStudyBlockResults(tx, study.id);
   const ids = [...new Set(blocks.flatMap((b) => b.assumptionIds))];
   const rows = ids.length
     ? await tx

@@ -38,7 +38,9 @@ export function toBlockRow(studyId: number, b: ComputedBlock): typeof studyBlock
   };
 }
 
-export function fromBlockRow(row: StudyBlockRow, assumptionIds: number[]): StudyBlockResult {
+type ResultColumns = Pick<StudyBlockRow, 'blockId' | 'resolvedSpec' | 'result' | 'error' | 'scenarios' | 'chart' | 'engineVersion' | 'computedAt'>;
+
+export function fromBlockRow(row: ResultColumns, assumptionIds: number[]): StudyBlockResult {
   return {
     blockId: row.blockId,
     status: row.error ? 'error' : 'ok',
@@ -98,7 +100,7 @@ const blocksWithLinks = preparedPer((db: Tx) =>
   db
     .select({
       row: studyBlocks,
-      links: sql<string | null>`(select group_concat(l.assumption_id) from ${studyBlockAssumptions} l where l.study_id = ${studyBlocks}.study_id and l.block_id = ${studyBlocks}.block_id)`,
+      links: linksOfBlock,
     })
     .from(studyBlocks)
     .where(eq(studyBlocks.studyId, sql.placeholder('studyId')))
@@ -106,8 +108,35 @@ const blocksWithLinks = preparedPer((db: Tx) =>
     .prepare(),
 );
 
+const linkIds = (links: string | null): number[] => (links ? links.split(',').map(Number).sort((a, b) => a - b) : []);
+const linksOfBlock = sql<string | null>`(select group_concat(l.assumption_id) from ${studyBlockAssumptions} l where l.study_id = ${studyBlocks}.study_id and l.block_id = ${studyBlocks}.block_id)`;
+
+/** Only what a reader needs (no block config, title or hash): fewer JSON columns to decode. */
+const blockResults = preparedPer((db: Tx) =>
+  db
+    .select({
+      blockId: studyBlocks.blockId,
+      resolvedSpec: studyBlocks.resolvedSpec,
+      result: studyBlocks.result,
+      error: studyBlocks.error,
+      scenarios: studyBlocks.scenarios,
+      chart: studyBlocks.chart,
+      engineVersion: studyBlocks.engineVersion,
+      computedAt: studyBlocks.computedAt,
+      links: linksOfBlock,
+    })
+    .from(studyBlocks)
+    .where(eq(studyBlocks.studyId, sql.placeholder('studyId')))
+    .orderBy(studyBlocks.position)
+    .prepare(),
+);
+
+/** The stored results of every block of a study, in document order. */
+export async function readStudyBlockResults(db: Tx, studyId: number): Promise<StudyBlockResult[]> {
+  return (await blockResults(db).execute({ studyId })).map((row) => fromBlockRow(row, linkIds(row.links)));
+}
+
 export async function readStudyBlocks(db: Tx, studyId: number): Promise<Map<string, { row: StudyBlockRow; result: StudyBlockResult }>> {
   const rows = await blocksWithLinks(db).execute({ studyId });
-  const ids = (links: string | null): number[] => (links ? links.split(',').map(Number).sort((a, b) => a - b) : []);
-  return new Map(rows.map(({ row, links }) => [row.blockId, { row, result: fromBlockRow(row, ids(links)) }]));
+  return new Map(rows.map(({ row, links }) => [row.blockId, { row, result: fromBlockRow(row, linkIds(links)) }]));
 }

@@ -5,7 +5,7 @@ import type { StudyDetail, StudySummary } from '../../../shared/schemas/studies'
 import type { AppContext } from '../../context';
 import { studies, users } from '../../db/schema/index';
 import type { EngagementRow } from '../engagements/engagement-access';
-import { readStudyBlocks } from './block-rows';
+import { readStudyBlockResults } from './block-rows';
 import type { LoadedStudy, StudyRow } from './study-access';
 
 const author = alias(users, 'author');
@@ -43,7 +43,7 @@ export async function listStudies(ctx: AppContext, engagementId: number): Promis
  */
 export async function describeStudy(ctx: AppContext, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[], loaded?: LoadedStudy): Promise<StudyDetail> {
   const row = loaded ? { s: loaded.study, authorName: loaded.authorName, updatedByName: loaded.updatedByName } : (await summaryQuery(ctx).where(eq(studies.id, studyId)))[0];
-  const results = blocks ?? [...(await readStudyBlocks(ctx.db, studyId)).values()].map((b) => b.result);
+  const results = blocks ?? (await readStudyBlockResults(ctx.db, studyId));
   return {
     ...toSummary(row!),
     document: row!.s.document as StudyDetail['document'],

@@ -60,6 +60,7 @@ export async function updateUser(ctx: AppContext, id: number, patch: UpdateUser,
     audits.push({ action: 'user_reactivated', actor: by, subject: user.email, ip });
   }
   await ctx.db.update(users).set(set).where(eq(users.id, id));
+  ctx.sessionStore.forgetUser(id);
   for (const a of audits) await recordAudit(ctx.db, a);
   if (set.status === 'deactivated') await endSessionsOf(ctx, id);
   return toUser((await findUserById(ctx.db, id))!);

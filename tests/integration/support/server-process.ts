@@ -6,6 +6,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { resolve } from 'node:path';
 import { freePort } from '../../../scripts/stack/ports';
+import { SERVER_NODE_ARGS } from '../../../scripts/stack/server-args';
 
 const root = resolve(import.meta.dirname, '../../..');
 
@@ -23,7 +24,7 @@ export interface ServerProcess {
 export async function startServerProcess(env: Record<string, string> = {}): Promise<ServerProcess> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['--import', 'tsx', resolve(root, 'api/server.ts')], {
+  const child = spawn(process.execPath, [...SERVER_NODE_ARGS, resolve(root, 'api/server.ts')], {
     cwd: root,
     env: { ...process.env, PUBLIC_URL: url, WEB_DIST: '', ...env, PORT: String(port), HOST: '127.0.0.1' },
     stdio: ['ignore', 'pipe', 'pipe'],
