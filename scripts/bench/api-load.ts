@@ -35,12 +35,19 @@ function requests(studyId: number, engagementId: number, cookies: string[]): aut
     body: JSON.stringify(body),
     setupRequest: withSession,
   });
-  return [
-    { method: 'GET', path: `/api/studies/${studyId}`, setupRequest: withSession },
-    { method: 'GET', path: `/api/engagements/${engagementId}/assumptions`, setupRequest: withSession },
-    post(MMC),
-    post(STAFFING),
-  ];
+  const kinds: Record<string, autocannon.Request[]> = {
+    study: [{ method: 'GET', path: `/api/studies/${studyId}`, setupRequest: withSession }],
+    register: [{ method: 'GET', path: `/api/engagements/${engagementId}/assumptions`, setupRequest: withSession }],
+    compute: [post(MMC), post(STAFFING)],
+    session: [{ method: 'GET', path: '/api/auth/me', setupRequest: withSession }],
+  };
+  // BENCH_API_ONLY=study|register|compute|session measures one kind alone (for profiling).
+  const only = process.env.BENCH_API_ONLY;
+  if (only) {
+    if (!kinds[only]) throw new Error(`BENCH_API_ONLY must be one of ${Object.keys(kinds).join(', ')}`);
+    return kinds[only];
+  }
+  return [...kinds.study!, ...kinds.register!, ...kinds.compute!];
 }
 
 /**
@@ -73,7 +80,7 @@ const suite: BenchSuite = async () => {
     const cpu1 = [...pids.map((pid) => (pid ? processCpuMs(pid) : null)), ownCpuMs()];
     const failed = r.errors + r.timeouts + r.non2xx;
     const setup = `${CONNECTIONS} connections, ${DURATION_S} s, ${fixture.cookies.length} sessions`;
-    const mix = `study GET (${STUDY_BLOCKS} blocks) + register GET + 2 compute POSTs`;
+    const mix = process.env.BENCH_API_ONLY ? `${process.env.BENCH_API_ONLY} requests only` : `study GET (${STUDY_BLOCKS} blocks) + register GET + 2 compute POSTs`;
     return [
       { area: 'api', what: `requests/s, ${mix}, ${setup}`, measured: r.requests.average, unit: 'req/s', target: `>= ${RATE_TARGET}`, ok: r.requests.average >= RATE_TARGET },
       { area: 'api', what: `p99 latency (p50 ${r.latency.p50} ms, p97.5 ${r.latency.p97_5} ms, max ${r.latency.max} ms), ${setup}`, measured: r.latency.p99, unit: 'ms', target: `< ${P99_TARGET_MS} ms`, ok: r.latency.p99 < P99_TARGET_MS },
