@@ -53,7 +53,7 @@ const screens: Screen[] = [
   { name: 'invitation, unknown link', who: 'anonymous', path: () => '/invitations/not-a-real-token', ready: (p) => p.getByRole('heading', { level: 1 }).waitFor() },
 
   { name: 'engagements list (consultant)', who: 'consultant', path: () => '/engagements', ready: (p) => p.getByRole('list', { name: 'Engagements' }).waitFor() },
-  { name: 'engagement overview, new study form in error', who: 'consultant', path: (f) => `/engagements/${f.engagementId}`, ready: (p) => p.getByRole('heading', { name: 'Studies' }).waitFor(), act: async (p) => {
+  { name: 'engagement overview, new study form in error', who: 'consultant', path: (f) => `/engagements/${f.engagementId}`, ready: (p) => p.getByRole('heading', { name: 'Studies', exact: true }).waitFor(), act: async (p) => {
     await p.getByRole('button', { name: 'New study' }).first().click();
     await p.getByRole('button', { name: 'Create and open' }).click();
     await p.getByText('Enter a title').waitFor();
@@ -151,7 +151,7 @@ const screens: Screen[] = [
   { name: 'audit trail', who: 'admin', path: () => '/admin/audit', ready: (p) => p.getByRole('table').first().waitFor() },
   { name: 'mailbox', who: 'admin', path: () => '/admin/mailbox', ready: (p) => p.getByRole('article').first().waitFor() },
   { name: 'engagements list (admin)', who: 'admin', path: () => '/engagements', ready: (p) => p.getByRole('list', { name: 'Engagements' }).waitFor() },
-  { name: 'engagement overview, phone width', who: 'consultant', width: 390, path: (f) => `/engagements/${f.engagementId}`, ready: (p) => p.getByRole('heading', { name: 'Studies' }).waitFor() },
+  { name: 'engagement overview, phone width', who: 'consultant', width: 390, path: (f) => `/engagements/${f.engagementId}`, ready: (p) => p.getByRole('heading', { name: 'Studies', exact: true }).waitFor() },
   { name: 'study editor, phone width', who: 'consultant', width: 390, path: (f) => `/studies/${f.studyId}`, ready: (p) => p.locator('section.model-block table').first().waitFor(), shot: 'a11y-editor-phone' },
   { name: 'study reader, phone width', who: 'consultant', width: 390, path: (f) => `/studies/${f.studyId}/read`, ready: (p) => p.locator('table').first().waitFor() },
   { name: 'revision compare, phone width', who: 'partner', width: 390, path: (f) => `/revisions/${f.releasedRevisionId}/compare/${f.inReviewRevisionId}`, ready: (p) => p.getByRole('table').first().waitFor() },

@@ -46,7 +46,7 @@ describe('a consultant writing a study whose numbers follow the register', () =>
   it('starts a study from a template and lands in the editor', async () => {
     const page = await signedIn('consultant');
     await page.getByRole('list', { name: 'Engagements' }).getByRole('listitem').first().getByRole('link').click();
-    await page.getByRole('heading', { name: 'Studies' }).waitFor();
+    await page.getByRole('heading', { name: 'Studies', exact: true }).waitFor();
     engagementId = Number(/\/engagements\/(\d+)/.exec(page.url())?.[1]);
 
     await page.getByRole('button', { name: 'New study' }).click();
@@ -178,7 +178,7 @@ describe('who sees studies on the engagement overview', () => {
   it('shows an administrator the studies to read but no way to start one', async () => {
     const page = await signedIn('admin');
     await page.getByRole('list', { name: 'Engagements' }).getByRole('listitem').first().getByRole('link').click();
-    await page.getByRole('heading', { name: 'Studies' }).waitFor();
+    await page.getByRole('heading', { name: 'Studies', exact: true }).waitFor();
     await page.getByRole('link', { name: 'Assumption register' }).waitFor();
     expect(await page.getByRole('button', { name: 'New study' }).count()).toBe(0);
     await page.context().close();
@@ -188,7 +188,7 @@ describe('who sees studies on the engagement overview', () => {
     const page = await signedIn('client');
     await page.getByRole('list', { name: 'Engagements' }).getByRole('listitem').first().getByRole('link').click();
     await page.getByRole('heading', { name: 'Deliverables', exact: true }).waitFor();
-    expect(await page.getByRole('heading', { name: 'Studies' }).count()).toBe(0);
+    expect(await page.getByRole('heading', { name: 'Studies', exact: true }).count()).toBe(0);
     const engagement = /\/engagements\/(\d+)/.exec(page.url())?.[1];
     await page.goto(`${demo.url}/engagements/${engagement}/assumptions`);
     await page.getByRole('heading', { name: 'Not allowed' }).waitFor();
