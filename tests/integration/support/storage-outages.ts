@@ -3,7 +3,7 @@
  * answers (a hung store or a dropped network path), one that answers every request with 500.
  */
 import { createServer as createHttpServer } from 'node:http';
-import { createServer, type Socket } from 'node:net';
+import { createServer, type Server as NetServer, type Socket } from 'node:net';
 
 export interface BrokenStorage {
   endpoint: string;
@@ -34,6 +34,22 @@ function tracker() {
   };
 }
 
+/** Listens on a free loopback port; `dropConnections` ends open connections before closing. */
+async function listening(server: NetServer, t: ReturnType<typeof tracker>, dropConnections: () => void): Promise<BrokenStorage> {
+  await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
+  const port = (server.address() as { port: number }).port;
+  return {
+    endpoint: `http://127.0.0.1:${port}`,
+    requests: t.requests,
+    received: t.received,
+    close: () =>
+      new Promise<void>((r) => {
+        dropConnections();
+        server.close(() => r());
+      }),
+  };
+}
+
 /** Accepts TCP, reads the request, never answers. */
 export async function silentStorage(): Promise<BrokenStorage> {
   const t = tracker();
@@ -49,18 +65,9 @@ export async function silentStorage(): Promise<BrokenStorage> {
       if (head.includes('\r\n')) t.seen(head.slice(0, head.indexOf('\r\n')));
     });
   });
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
-  const port = (server.address() as { port: number }).port;
-  return {
-    endpoint: `http://127.0.0.1:${port}`,
-    requests: t.requests,
-    received: t.received,
-    close: () =>
-      new Promise<void>((r) => {
-        for (const s of sockets) s.destroy();
-        server.close(() => r());
-      }),
-  };
+  return listening(server, t, () => {
+    for (const s of sockets) s.destroy();
+  });
 }
 
 /** Answers every request with an S3-style 500 InternalError. */
@@ -74,16 +81,5 @@ export async function failingStorage(): Promise<BrokenStorage> {
       res.end('<?xml version="1.0" encoding="UTF-8"?><Error><Code>InternalError</Code><Message>We encountered an internal error. Please try again.</Message></Error>');
     });
   });
-  await new Promise<void>((r) => server.listen(0, '127.0.0.1', () => r()));
-  const port = (server.address() as { port: number }).port;
-  return {
-    endpoint: `http://127.0.0.1:${port}`,
-    requests: t.requests,
-    received: t.received,
-    close: () =>
-      new Promise<void>((r) => {
-        server.closeAllConnections();
-        server.close(() => r());
-      }),
-  };
+  return listening(server, t, () => server.closeAllConnections());
 }
