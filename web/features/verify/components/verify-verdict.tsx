@@ -49,11 +49,14 @@ export function VerifyVerdict({ result, fileName }: { result: VerifyResult; file
             rely on its figures; download the deliverable again or ask your contact.
           </p>
         )}
-        <p className="text-sm text-ink-soft">{result.message}</p>
+        {/* For a valid copy the sentence above already says all of the server's finding. */}
+        {kind !== 'valid' && <p className="text-sm text-ink-soft">{result.message}</p>}
       </div>
       <details className="mt-4 text-sm">
         <summary className="cursor-pointer font-medium">Technical details</summary>
         <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-ink-soft">
+          <dt>Finding</dt>
+          <dd>{result.message}</dd>
           <dt>File SHA-256</dt>
           <dd className="font-mono text-xs break-all">{result.fileSha256}</dd>
           <dt>Signed</dt>
