@@ -8,8 +8,8 @@ import { sessions, users } from '../db/schema/index';
  * A rolling session would otherwise write its new expiry to MariaDB on every request (one
  * UPDATE and one redo-log flush per API call, most of the database's work under load). Once per
  * minute per session is enough for a 12-hour lifetime: the stored expiry then trails the cookie
- * by at most two minutes. Reading, signing out and deactivation still go to the database every time,
- * so a destroyed session is refused by every process at its next request.
+ * by at most two minutes. Signing out and deactivation still write to the database at once; other
+ * processes see them within the read cache's lifetime (SessionReadCache below).
  */
 export const TOUCH_EVERY_MS = 60_000;
 
@@ -57,8 +57,8 @@ export function createSessionStore(databaseUrl: string, db: Db, cacheMs = 0): Se
     return callback ? touch(sid, data, callback) : touch(sid, data);
   }) as typeof store.touch;
 
-  // Every signed-in request needs its session and its user: one query reads both, so the user is
-  // as fresh as before (no cache) and a request costs one round trip to MariaDB less.
+  // Every signed-in request needs its session and its user: one query reads both, so a request
+  // costs one round trip to MariaDB less than reading the user separately.
   const withUser = db
     .select({ data: sessions.data, expires: sessions.expires, user: { id: users.id, email: users.email, name: users.name, role: users.role, status: users.status } })
     .from(sessions)
@@ -112,13 +112,12 @@ interface SessionRow {
  * such a change within `ms` at most, the same order as a request already in flight.
  */
 class SessionReadCache {
-  private readonly rows = new Map<string, { row: SessionRow | undefined; until: number }>();
+  private readonly rows = new Map<string, { row: SessionRow; until: number }>();
   constructor(private readonly ms: number) {}
 
   get(sid: string): SessionRow | undefined {
     const hit = this.rows.get(sid);
-    if (!hit || hit.until <= Date.now() || !hit.row) return undefined;
-    return hit.row;
+    return hit && hit.until > Date.now() ? hit.row : undefined;
   }
 
   put(sid: string, row: SessionRow | undefined): SessionRow | undefined {
@@ -134,6 +133,6 @@ class SessionReadCache {
   }
 
   forgetUser(userId: number): void {
-    for (const [k, v] of this.rows) if (v.row?.user?.id === userId) this.rows.delete(k);
+    for (const [k, v] of this.rows) if (v.row.user?.id === userId) this.rows.delete(k);
   }
 }

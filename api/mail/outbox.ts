@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { and, eq, inArray, isNull, lte, or, sql } from 'drizzle-orm';
 import type { Db } from '../db/client';
+import { periodicPass } from '../lib/periodic-pass';
 import { mailOutbox } from '../db/schema/index';
 import type { Mailer, OutgoingMail } from './mailer';
 
@@ -16,8 +17,6 @@ const backoffMs = (attempt: number): number => Math.min(5_000 * 2 ** (attempt - 
  */
 export function createOutbox(db: Db, mailer: Mailer) {
   const owner = randomBytes(8).toString('hex');
-  let timer: NodeJS.Timeout | null = null;
-  let running: Promise<number> | null = null;
 
   async function deliverDue(): Promise<number> {
     const now = new Date();
@@ -59,15 +58,9 @@ export function createOutbox(db: Db, mailer: Mailer) {
     return sent;
   }
 
-  /** Runs one delivery pass unless one is under way; never throws (errors wait for the next pass). */
-  function kick(): Promise<number> {
-    running ??= deliverDue()
-      .catch(() => 0)
-      .finally(() => {
-        running = null;
-      });
-    return running;
-  }
+  /** One delivery pass unless one is under way; never throws (errors wait for the next pass). */
+  const delivery = periodicPass(deliverDue);
+  const kick = delivery.run;
 
   return {
     /**
@@ -84,15 +77,8 @@ export function createOutbox(db: Db, mailer: Mailer) {
     },
     kick,
     /** Periodic retries; started by the server process, not by tests that drive createApp. */
-    start(intervalMs = 2_000): void {
-      timer ??= setInterval(() => void kick(), intervalMs);
-      timer.unref();
-    },
-    async stop(): Promise<void> {
-      if (timer) clearInterval(timer);
-      timer = null;
-      await running;
-    },
+    start: (intervalMs = 2_000): void => delivery.start(intervalMs),
+    stop: delivery.stop,
     /** Counts for /api/health and tests. */
     async pendingCount(ids?: number[]): Promise<number> {
       const [row] = await db

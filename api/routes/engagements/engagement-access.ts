@@ -21,8 +21,11 @@ const engagementWithMembership = preparedPer((db: Db) =>
     .prepare(),
 );
 
+/** Admins see every engagement; anyone else only those with a membership row (joined in as `memberId`). */
+export const seesEngagement = (user: SessionUser, memberId: number | null): boolean => user.role === 'admin' || memberId !== null;
+
 export async function loadEngagementFor(db: Db, user: SessionUser, engagementId: number): Promise<EngagementRow> {
   const [row] = await engagementWithMembership(db).execute({ userId: user.id, engagementId });
-  if (!row || (user.role !== 'admin' && row.memberId === null)) throw notFound('That engagement');
+  if (!row || !seesEngagement(user, row.memberId)) throw notFound('That engagement');
   return row.engagement;
 }

@@ -64,15 +64,15 @@ export async function releaseRevision(ctx: AppContext, rc: RevisionContext, by: 
       { abortSignal: AbortSignal.any([AbortSignal.timeout(30_000), lease.signal]) },
     );
   } catch (err) {
-    lease.release();
     // A lost claim aborts the upload; the SDK then reports only "Request aborted", so say why.
     const cause = (lease.signal.aborted ? lease.signal.reason : err) as Error;
     const reason = `${cause.name === 'Error' ? '' : `${cause.name}: `}${cause.message || 'unknown error'}`;
     await failRelease(ctx, revision.id, attempt, reason);
     await recordAudit(ctx.db, { action: 'release_failed', actor: by, engagementId: rc.engagement.id, subject: `${rc.study.title}, revision ${revision.number}`, detail: { revisionId: revision.id, attempt, reason }, ip });
     throw new HttpError(503, 'release_failed', `The signed PDF could not be stored (${reason}). The release was recorded as failed; revision ${revision.number} stays approved and can be released again.`);
+  } finally {
+    lease.release();
   }
-  lease.release();
   const fileSha256 = createHash('sha256').update(file).digest('hex');
   const fresh = { ...rc, revision: { ...revision, status: 'released' as const, releasedAt } };
   const to = [...(await membersWithRoles(ctx, rc.engagement.id, ['client'])), ...(await submitterOf(ctx, fresh))];

@@ -1,5 +1,6 @@
 import { and, eq, isNull, lt, or } from 'drizzle-orm';
 import type { AppContext } from '../../context';
+import { periodicPass } from '../../lib/periodic-pass';
 import { releases, revisions, studies } from '../../db/schema/index';
 import { recordAudit } from '../audit/audit.service';
 import { isHeldHere } from './release-lease';
@@ -52,32 +53,17 @@ export async function sweepInterruptedReleases(ctx: AppContext, opts: { asAnothe
  * api/server.ts; every API process may run one.
  */
 export function createReleaseSweeper(ctx: AppContext) {
-  let timer: NodeJS.Timeout | null = null;
-  let running: Promise<number> | null = null;
-  const sweep = (): Promise<number> => {
-    running ??= sweepInterruptedReleases(ctx)
-      .then((n) => {
-        if (n > 0) console.log(`[api] marked ${n} interrupted release(s) as failed`);
-        return n;
-      })
-      // The database may be down for a moment; the next pass tries again.
-      .catch(() => 0)
-      .finally(() => {
-        running = null;
-      });
-    return running;
-  };
+  const sweeps = periodicPass(async () => {
+    const n = await sweepInterruptedReleases(ctx);
+    if (n > 0) console.log(`[api] marked ${n} interrupted release(s) as failed`);
+    return n;
+  });
   return {
-    sweep,
+    sweep: sweeps.run,
     start(intervalMs = Math.min(Math.max(ctx.config.releaseLeaseMs / 4, 500), 15_000)): void {
-      void sweep();
-      timer ??= setInterval(() => void sweep(), intervalMs);
-      timer.unref();
+      void sweeps.run();
+      sweeps.start(intervalMs);
     },
-    async stop(): Promise<void> {
-      if (timer) clearInterval(timer);
-      timer = null;
-      await running;
-    },
+    stop: sweeps.stop,
   };
 }

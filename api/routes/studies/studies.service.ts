@@ -1,15 +1,11 @@
 import { desc, eq } from 'drizzle-orm';
-import { alias } from 'drizzle-orm/mysql-core';
 import type { StudyBlockResult } from '../../../shared/schemas/model-block';
 import type { StudyDetail, StudySummary } from '../../../shared/schemas/studies';
 import type { AppContext } from '../../context';
-import { studies, users } from '../../db/schema/index';
+import { studies } from '../../db/schema/index';
 import type { EngagementRow } from '../engagements/engagement-access';
 import { readStudyBlockResults } from './block-rows';
-import type { LoadedStudy, StudyRow } from './study-access';
-
-const author = alias(users, 'author');
-const editor = alias(users, 'editor');
+import { author, editor, type LoadedStudy, type StudyRow } from './study-access';
 
 const summaryQuery = (ctx: AppContext) =>
   ctx.db

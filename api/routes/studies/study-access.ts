@@ -5,7 +5,7 @@ import type { Db } from '../../db/client';
 import { preparedPer } from '../../db/prepared';
 import { engagements, memberships, studies, users } from '../../db/schema/index';
 import { forbidden, notFound } from '../../http-error';
-import { loadEngagementFor, type EngagementRow } from '../engagements/engagement-access';
+import { loadEngagementFor, seesEngagement, type EngagementRow } from '../engagements/engagement-access';
 
 export type StudyRow = typeof studies.$inferSelect;
 export type Access = 'read' | 'write';
@@ -17,8 +17,9 @@ export interface LoadedStudy {
   updatedByName: string | null;
 }
 
-const author = alias(users, 'author');
-const editor = alias(users, 'editor');
+/** The study's author and last editor, joined by name wherever a study is summarised. */
+export const author = alias(users, 'author');
+export const editor = alias(users, 'editor');
 
 /**
  * Role gate for studies, assumptions and templates: clients never (they see released
@@ -56,6 +57,6 @@ const studyWithAccess = preparedPer((db: Db) =>
 export async function loadStudyFor(db: Db, user: SessionUser, studyId: number, access: Access): Promise<LoadedStudy> {
   assertStudyRole(user, access);
   const [row] = await studyWithAccess(db).execute({ userId: user.id, studyId });
-  if (!row || (user.role !== 'admin' && row.memberId === null)) throw notFound('That study');
+  if (!row || !seesEngagement(user, row.memberId)) throw notFound('That study');
   return { study: row.study, engagement: row.engagement, authorName: row.authorName, updatedByName: row.updatedByName };
 }

@@ -1,7 +1,8 @@
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { User } from '../../../shared/schemas/users';
 import type { Db } from '../../db/client';
+import { preparedPer } from '../../db/prepared';
 import { users } from '../../db/schema/index';
 
 export type UserRow = typeof users.$inferSelect;
@@ -23,7 +24,10 @@ export async function findUserByEmail(db: Db, email: string): Promise<UserRow | 
   return row;
 }
 
+/** Prepared once (db/prepared.ts): passport reads the user by id on signed-in requests. */
+const userById = preparedPer((db: Db) => db.select().from(users).where(eq(users.id, sql.placeholder('id'))).prepare());
+
 export async function findUserById(db: Db, id: number): Promise<UserRow | undefined> {
-  const [row] = await db.select().from(users).where(eq(users.id, id));
+  const [row] = await userById(db).execute({ id });
   return row;
 }
