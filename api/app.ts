@@ -70,7 +70,8 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   const passport = configurePassport(ctx.db, ctx.sessionStore);
-  api.use(passport.initialize());
+  // compat: the req._passport shim is for strategies written for passport 0.4, which we do not use.
+  api.use(passport.initialize({ compat: false }));
   api.use(passport.session());
   api.use(csrfGuard(ctx.config.publicUrl));
   api.use((_req, res, next) => {

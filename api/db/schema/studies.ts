@@ -18,6 +18,12 @@ export const studies = mysqlTable(
     /** Sanitised TipTap JSON (MariaDB stores json as longtext with a json_valid check). */
     document: json('document').$type<Record<string, unknown>>().notNull(),
     version: int('version').notNull().default(1),
+    /**
+     * Bumped whenever the server's stored results of the study change without its document (an
+     * assumption edit recomputes linked blocks). With `version` it names one state of document and
+     * results, the key of the read cache (study-read.ts).
+     */
+    resultsVersion: int('results_version').notNull().default(0),
     createdBy: int('created_by').references(() => users.id, { onDelete: 'set null' }),
     updatedBy: int('updated_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: datetime('created_at', { mode: 'date', fsp: 3 }).notNull(),

@@ -1,25 +1,14 @@
-import { and, count, eq, inArray, sql } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { DRAFT_STUDY_STATUSES } from '../../../shared/schemas/studies';
 import type { Db } from '../../db/client';
-import { preparedPer } from '../../db/prepared';
-import { studies, studyBlockAssumptions, studyBlocks } from '../../db/schema/index';
+import { assumptions, studies, studyBlockAssumptions, studyBlocks } from '../../db/schema/index';
 import type { Tx } from '../studies/block-rows';
 
-/** Blocks linking each assumption of an engagement, counted over draft studies only. */
-const usageOf = preparedPer((db: Db) =>
-  db
-    .select({ id: studyBlockAssumptions.assumptionId, n: count() })
-    .from(studyBlockAssumptions)
-    .innerJoin(studies, eq(studies.id, studyBlockAssumptions.studyId))
-    .where(and(eq(studies.engagementId, sql.placeholder('engagementId')), inArray(studies.status, [...DRAFT_STUDY_STATUSES])))
-    .groupBy(studyBlockAssumptions.assumptionId)
-    .prepare(),
-);
-
-export async function usageCounts(db: Db, engagementId: number): Promise<Map<number, number>> {
-  const rows = await usageOf(db).execute({ engagementId });
-  return new Map(rows.map((r) => [r.id, Number(r.n)]));
-}
+/**
+ * Blocks linking the assumption of the row being selected, counted over draft studies only: a
+ * column of the register's own query (by the assumption index), not a second query.
+ */
+export const usageCount = sql<number>`(select count(*) from ${studyBlockAssumptions} inner join ${studies} on ${studies.id} = ${studyBlockAssumptions.studyId} where ${studyBlockAssumptions.assumptionId} = ${assumptions.id} and ${inArray(studies.status, [...DRAFT_STUDY_STATUSES])})`.mapWith(Number);
 
 export interface BlockUse {
   studyId: number;

@@ -8,13 +8,13 @@ import { assumptions, memberships, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http-error';
 import { recordAudit } from '../audit/audit.service';
 import type { EngagementRow } from '../engagements/engagement-access';
-import { blocksUsing, usageCounts } from './assumption-usage';
+import { blocksUsing, usageCount } from './assumption-usage';
 import { propagateChange } from './propagate-change';
 
 export type AssumptionRow = typeof assumptions.$inferSelect;
 
-const query = (ctx: AppContext) =>
-  ctx.db.select({ a: assumptions, ownerName: users.name }).from(assumptions).leftJoin(users, eq(users.id, assumptions.ownerId));
+/** Assumptions with their owner's name and how many draft-study blocks link each. */
+const query = (db: Db) => db.select({ a: assumptions, ownerName: users.name, usage: usageCount }).from(assumptions).leftJoin(users, eq(users.id, assumptions.ownerId));
 
 const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: number): Assumption => ({
   id: a.id,
@@ -34,24 +34,21 @@ const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: nu
 
 /** The register is read whenever a study opens in the editor: its SQL is built once (db/prepared.ts). */
 const registerOf = preparedPer((db: Db) =>
-  db
-    .select({ a: assumptions, ownerName: users.name })
-    .from(assumptions)
-    .leftJoin(users, eq(users.id, assumptions.ownerId))
+  query(db)
     .where(eq(assumptions.engagementId, sql.placeholder('engagementId')))
     .orderBy(assumptions.name)
     .prepare(),
 );
 
 export async function listAssumptions(ctx: AppContext, engagementId: number): Promise<Assumption[]> {
-  const [rows, counts] = await Promise.all([registerOf(ctx.db).execute({ engagementId }), usageCounts(ctx.db, engagementId)]);
-  return rows.map((r) => toAssumption(r.a, r.ownerName, counts.get(r.a.id) ?? 0));
+  const rows = await registerOf(ctx.db).execute({ engagementId });
+  return rows.map((r) => toAssumption(r.a, r.ownerName, r.usage));
 }
 
 async function describe(ctx: AppContext, id: number): Promise<Assumption> {
-  const [r] = await query(ctx).where(eq(assumptions.id, id));
+  const [r] = await query(ctx.db).where(eq(assumptions.id, id));
   if (!r) throw notFound('That assumption');
-  return toAssumption(r.a, r.ownerName, (await usageCounts(ctx.db, r.a.engagementId)).get(id) ?? 0);
+  return toAssumption(r.a, r.ownerName, r.usage);
 }
 
 /** An owner must be a member of the engagement (the register names people the client knows). */

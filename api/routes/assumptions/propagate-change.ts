@@ -1,4 +1,4 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { MovedNumber } from '../../../shared/schemas/assumptions';
 import type { BlockConfig } from '../../../shared/schemas/model-block';
 import { DRAFT_STUDY_STATUSES } from '../../../shared/schemas/studies';
@@ -12,7 +12,8 @@ import { blockTitle } from './assumption-usage';
 /**
  * Recomputes every block that links `assumptionId` in the draft studies of the engagement, inside
  * the transaction that changed the assumption, and lists each number that moved. Study versions
- * are not bumped: the documents did not change, only what the server computed from them.
+ * are not bumped (the documents did not change, and an open editor's next save must not be
+ * refused for it); their results versions are, so no cached read serves the old numbers.
  */
 export async function propagateChange(tx: Tx, engagementId: number, assumptionId: number): Promise<MovedNumber[]> {
   const uses = await tx
@@ -26,9 +27,9 @@ export async function propagateChange(tx: Tx, engagementId: number, assumptionId
   const moved: MovedNumber[] = [];
   const at = new Date();
   for (const s of uses) {
-    // The assumption row is already locked by the caller's UPDATE; a save locks its assumptions
-    // before its study row, so taking the study row here cannot deadlock with it.
-    await tx.select({ id: studies.id }).from(studies).where(eq(studies.id, s.studyId)).for('update');
+    // Locks the study row. The assumption row is already locked by the caller's UPDATE; a save
+    // locks its assumptions before its study row, so taking the study row here cannot deadlock.
+    await tx.update(studies).set({ resultsVersion: sql`${studies.resultsVersion} + 1` }).where(eq(studies.id, s.studyId));
     for (const { row, result: before } of (await readStudyBlocks(tx, s.studyId)).values()) {
       if (!before.assumptionIds.includes(assumptionId)) continue;
       const config = row.config as unknown as BlockConfig;

@@ -5,7 +5,8 @@ import { currentUser } from '../../middleware/auth';
 import { idParam, parse } from '../../middleware/parse';
 import { createStudy } from './create-study';
 import { saveStudyDocument } from './save-document';
-import { describeStudy, listStudies } from './studies.service';
+import { listStudies } from './studies.service';
+import { readStudyJson } from './study-read';
 import { assertStudyRole, loadEngagementForStudies, loadStudyFor, type Access } from './study-access';
 import { loadStudyTemplates, summariseTemplate } from './template-registry';
 
@@ -23,8 +24,7 @@ export function studiesRouter(ctx: AppContext): Router {
     res.status(201).json({ study: await createStudy(ctx, e, parse(createStudySchema, req.body), currentUser(req), req.ip) });
   });
   r.get('/studies/:id', async (req, res) => {
-    const loaded = await study(req, 'read');
-    res.json({ study: await describeStudy(ctx, loaded.study.id, loaded.engagement, undefined, loaded) });
+    res.type('json').send(await readStudyJson(ctx, currentUser(req), idParam(req.params.id, 'That study')));
   });
   r.put('/studies/:id/document', async (req, res) => {
     const { study: s, engagement: e } = await study(req, 'write');

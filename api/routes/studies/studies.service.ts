@@ -5,7 +5,7 @@ import type { AppContext } from '../../context';
 import { studies } from '../../db/schema/index';
 import type { EngagementRow } from '../engagements/engagement-access';
 import { readStudyBlockResults } from './block-rows';
-import { author, editor, type LoadedStudy, type StudyRow } from './study-access';
+import { author, editor, type LoadedStudy, type StudyHead } from './study-access';
 
 const summaryQuery = (ctx: AppContext) =>
   ctx.db
@@ -14,7 +14,7 @@ const summaryQuery = (ctx: AppContext) =>
     .leftJoin(author, eq(author.id, studies.createdBy))
     .leftJoin(editor, eq(editor.id, studies.updatedBy));
 
-const toSummary = ({ s, authorName, updatedByName }: { s: StudyRow; authorName: string | null; updatedByName: string | null }): StudySummary => ({
+const toSummary = ({ s, authorName, updatedByName }: { s: StudyHead; authorName: string | null; updatedByName: string | null }): StudySummary => ({
   id: s.id,
   engagementId: s.engagementId,
   title: s.title,
@@ -32,13 +32,14 @@ export async function listStudies(ctx: AppContext, engagementId: number): Promis
   return rows.map(toSummary);
 }
 
+export const studySummary = (l: LoadedStudy<StudyHead>): StudySummary => toSummary({ s: l.study, authorName: l.authorName, updatedByName: l.updatedByName });
+
 /**
- * A study with its document and the server's results per block. `blocks` may be passed when the
- * caller has just computed them (a save), and `loaded` when the caller has just read the study
- * with loadStudyFor (a read), each saving a query.
+ * A study with its document and the server's results per block, after a change (the read of an
+ * unchanged study is study-read.ts). `blocks` may be passed when the caller has just computed them.
  */
-export async function describeStudy(ctx: AppContext, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[], loaded?: LoadedStudy): Promise<StudyDetail> {
-  const row = loaded ? { s: loaded.study, authorName: loaded.authorName, updatedByName: loaded.updatedByName } : (await summaryQuery(ctx).where(eq(studies.id, studyId)))[0];
+export async function describeStudy(ctx: AppContext, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[]): Promise<StudyDetail> {
+  const [row] = await summaryQuery(ctx).where(eq(studies.id, studyId));
   const results = blocks ?? (await readStudyBlockResults(ctx.db, studyId));
   return {
     ...toSummary(row!),

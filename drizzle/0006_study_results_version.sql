@@ -1,0 +1,1 @@
+ALTER TABLE `studies` ADD `results_version` int DEFAULT 0 NOT NULL;
