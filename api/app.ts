@@ -70,8 +70,8 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   const passport = configurePassport(ctx.db, ctx.sessionStore);
-  // compat: the req._passport shim is for strategies written for passport 0.4, which we do not use.
-  api.use(passport.initialize({ compat: false }));
+  // No passport.initialize(): passport.session() below sets up the same request helpers itself
+  // (passport 0.6+), and the compatibility shim it adds is for strategies written for passport 0.4.
   api.use(passport.session());
   api.use(csrfGuard(ctx.config.publicUrl));
   api.use((_req, res, next) => {

@@ -69,7 +69,8 @@ export function createSessionStore(databaseUrl: string, db: Db, cacheMs = 0): Se
   const cache = new SessionReadCache(cacheMs);
   const get = async (sid: string): Promise<session.SessionData | null> => {
     readUsers.delete(sid);
-    const row = cache.get(sid) ?? cache.put(sid, (await withUser.execute({ sid }))[0]);
+    const read = async (): Promise<SessionRow | undefined> => (await withUser.execute({ sid }))[0];
+    const row = cache.get(sid, read) ?? cache.put(sid, await read());
     if (!row || row.expires < Math.round(Date.now() / 1000) || row.data === null) return null;
     // Bounded: an entry lives from here to the deserializer of the same request.
     if (readUsers.size > 10_000) readUsers.clear();
@@ -107,24 +108,41 @@ interface SessionRow {
 
 /**
  * Under load most of a small request's cost is reading its session and user. Each process keeps
- * what it read for `ms` (SESSION_CACHE_MS, default 1 s; 0 turns it off). Signing out, a new
- * session and a change to a person in this process drop the entry at once; another process sees
- * such a change within `ms` at most, the same order as a request already in flight.
+ * what it read for `ms` (SESSION_CACHE_MS, default 1 s; 0 turns it off). Past half that age the
+ * entry is still used while one read in the background replaces it, so a busy session never waits
+ * for MariaDB and nothing older than `ms` is ever used. Signing out, a new session and a change to
+ * a person in this process drop the entry at once (and a background read then started is not
+ * kept); another process sees such a change within `ms` at most, the same order as a request
+ * already in flight.
  */
 class SessionReadCache {
-  private readonly rows = new Map<string, { row: SessionRow; until: number }>();
+  private readonly rows = new Map<string, { row: SessionRow; at: number; refreshing: boolean }>();
   constructor(private readonly ms: number) {}
 
-  get(sid: string): SessionRow | undefined {
+  get(sid: string, read: () => Promise<SessionRow | undefined>): SessionRow | undefined {
     const hit = this.rows.get(sid);
-    return hit && hit.until > Date.now() ? hit.row : undefined;
+    const age = hit ? Date.now() - hit.at : Infinity;
+    if (!hit || age >= this.ms) return undefined;
+    if (age >= this.ms / 2 && !hit.refreshing) {
+      hit.refreshing = true;
+      read().then(
+        (row) => {
+          if (this.rows.get(sid) !== hit) return;
+          if (row) this.put(sid, row);
+          else this.rows.delete(sid);
+        },
+        // The next request past `ms` reads it itself, and fails as the database does.
+        () => undefined,
+      );
+    }
+    return hit.row;
   }
 
   put(sid: string, row: SessionRow | undefined): SessionRow | undefined {
     if (this.ms <= 0 || !row) return row;
     const now = Date.now();
-    if (this.rows.size >= 10_000) for (const [k, v] of this.rows) if (v.until <= now) this.rows.delete(k);
-    if (this.rows.size < 10_000) this.rows.set(sid, { row, until: now + this.ms });
+    if (this.rows.size >= 10_000) for (const [k, v] of this.rows) if (now - v.at >= this.ms) this.rows.delete(k);
+    if (this.rows.size < 10_000 || this.rows.has(sid)) this.rows.set(sid, { row, at: now, refreshing: false });
     return row;
   }
 

@@ -8,7 +8,7 @@ import { currentUser } from '../../middleware/auth';
 import { idParam, parse } from '../../middleware/parse';
 import { loadEngagementFor } from '../engagements/engagement-access';
 import { assertStudyRole, loadEngagementForStudies, type Access } from '../studies/study-access';
-import { createAssumption, deleteAssumption, listAssumptions, updateAssumption, type AssumptionRow } from './assumptions.service';
+import { createAssumption, deleteAssumption, listAssumptionsFor, updateAssumption, type AssumptionRow } from './assumptions.service';
 
 /** The assumption register of an engagement; same roles as studies (clients never, admins read). */
 export function assumptionsRouter(ctx: AppContext): Router {
@@ -29,7 +29,7 @@ export function assumptionsRouter(ctx: AppContext): Router {
   };
 
   r.get('/engagements/:id/assumptions', async (req, res) => {
-    res.json({ assumptions: await listAssumptions(ctx, (await engagement(req, 'read')).id) });
+    res.json({ assumptions: await listAssumptionsFor(ctx, currentUser(req), idParam(req.params.id, 'That engagement')) });
   });
   r.post('/engagements/:id/assumptions', async (req, res) => {
     const e = await engagement(req, 'write');

@@ -4,10 +4,11 @@ import type { SessionUser } from '../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
 import type { Db } from '../../db/client';
 import { preparedPer } from '../../db/prepared';
-import { assumptions, memberships, users } from '../../db/schema/index';
+import { assumptions, engagements, memberships, users } from '../../db/schema/index';
 import { HttpError, notFound } from '../../http-error';
 import { recordAudit } from '../audit/audit.service';
-import type { EngagementRow } from '../engagements/engagement-access';
+import { seesEngagement, type EngagementRow } from '../engagements/engagement-access';
+import { assertStudyRole } from '../studies/study-access';
 import { blocksUsing, usageCount } from './assumption-usage';
 import { propagateChange } from './propagate-change';
 
@@ -32,17 +33,29 @@ const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: nu
   version: a.version,
 });
 
-/** The register is read whenever a study opens in the editor: its SQL is built once (db/prepared.ts). */
-const registerOf = preparedPer((db: Db) =>
-  query(db)
-    .where(eq(assumptions.engagementId, sql.placeholder('engagementId')))
+/**
+ * The register is read whenever a study opens in the editor: one query, built once (db/prepared.ts),
+ * answers both whether the user may see the engagement (its membership joined in) and the register.
+ * An engagement without assumptions still gives its one row, with `a` null.
+ */
+const registerWithAccess = preparedPer((db: Db) =>
+  db
+    .select({ memberId: memberships.userId, a: assumptions, ownerName: users.name, usage: usageCount })
+    .from(engagements)
+    .leftJoin(memberships, and(eq(memberships.engagementId, engagements.id), eq(memberships.userId, sql.placeholder('userId'))))
+    .leftJoin(assumptions, eq(assumptions.engagementId, engagements.id))
+    .leftJoin(users, eq(users.id, assumptions.ownerId))
+    .where(eq(engagements.id, sql.placeholder('engagementId')))
     .orderBy(assumptions.name)
     .prepare(),
 );
 
-export async function listAssumptions(ctx: AppContext, engagementId: number): Promise<Assumption[]> {
-  const rows = await registerOf(ctx.db).execute({ engagementId });
-  return rows.map((r) => toAssumption(r.a, r.ownerName, r.usage));
+/** The register of an engagement the user may read (the same 404 as loadEngagementFor otherwise). */
+export async function listAssumptionsFor(ctx: AppContext, user: SessionUser, engagementId: number): Promise<Assumption[]> {
+  assertStudyRole(user, 'read');
+  const rows = await registerWithAccess(ctx.db).execute({ userId: user.id, engagementId });
+  if (!rows[0] || !seesEngagement(user, rows[0].memberId)) throw notFound('That engagement');
+  return rows.flatMap((r) => (r.a ? [toAssumption(r.a, r.ownerName, r.usage)] : []));
 }
 
 async function describe(ctx: AppContext, id: number): Promise<Assumption> {

@@ -5,7 +5,7 @@ import type { CreateDatasetAssumptions } from '../../../shared/schemas/datasets'
 import type { AppContext } from '../../context';
 import { assumptions } from '../../db/schema/index';
 import { HttpError } from '../../http-error';
-import { listAssumptions } from '../assumptions/assumptions.service';
+import { listAssumptionsFor } from '../assumptions/assumptions.service';
 import { recordAudit } from '../audit/audit.service';
 import type { DatasetRow } from './dataset-access';
 
@@ -46,6 +46,6 @@ export async function createDatasetAssumptions(ctx: AppContext, dataset: Dataset
   for (const [i, a] of input.assumptions.entries()) {
     await recordAudit(ctx.db, { action: 'assumption_created', actor: by, engagementId: dataset.engagementId, subject: a.name, detail: { assumptionId: ids[i], value: a.value, unit: a.unit, datasetId: dataset.id }, ip });
   }
-  const all = await listAssumptions(ctx, dataset.engagementId);
+  const all = await listAssumptionsFor(ctx, by, dataset.engagementId);
   return all.filter((a) => ids.includes(a.id));
 }
