@@ -54,7 +54,15 @@ export function createSessionStore(databaseUrl: string, db: Db, cacheMs = 0): Se
       return Promise.resolve();
     }
     recent.add(sid);
-    return callback ? touch(sid, data, callback) : touch(sid, data);
+    // The answer does not wait for this write (express-session would hold the response's end for
+    // it, a redo-log flush away): a failed one is logged and tried again at the next request.
+    touch(sid, data, (err?: unknown) => {
+      if (!err) return;
+      recent.delete(sid);
+      console.warn(`[api] could not extend a session's expiry: ${(err as Error).message ?? String(err)}`);
+    });
+    callback?.();
+    return Promise.resolve();
   }) as typeof store.touch;
 
   // Every signed-in request needs its session and its user: one query reads both, so a request

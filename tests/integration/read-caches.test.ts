@@ -29,6 +29,8 @@ async function signInCookie(app: TestApp, email: string): Promise<string> {
   expect(res.status).toBe(200);
   return (res.headers['set-cookie'] as unknown as string[])[0]!.split(';')[0]!;
 }
+/** The session id inside a signed `sojourn.sid=s%3A<id>.<signature>` cookie. */
+const sidOf = (cookie: string): string => decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0]!;
 const me = (app: TestApp, cookie: string) => request(app.app).get('/api/auth/me').set('cookie', cookie);
 
 /** Asks every 20 ms until `refused` holds; the milliseconds it took. */
@@ -70,11 +72,23 @@ describe('session read cache', () => {
     expect(await msUntil(async () => (await me(one, cookie)).status === 401)).toBeLessThan(CACHE_MS + 150);
   });
 
+  it('extends the stored expiry of a session in use, after answering', async () => {
+    const u = await makeUser(one.ctx, 'consultant');
+    const cookie = await signInCookie(one, u.email);
+    const sid = sidOf(cookie);
+    const soon = Math.round(Date.now() / 1000) + 120;
+    await one.ctx.db.update(sessions).set({ expires: soon }).where(eq(sessions.sessionId, sid));
+    expect((await me(other, cookie)).status).toBe(200);
+    const stored = async () => (await one.ctx.db.select({ expires: sessions.expires }).from(sessions).where(eq(sessions.sessionId, sid)))[0]!.expires;
+    // The cookie lives 12 hours from its last use; so does the stored session.
+    await msUntil(async () => (await stored()) > soon + 11 * 3600);
+  });
+
   it('refuses a session removed from the database within its cache time', async () => {
     const u = await makeUser(one.ctx, 'consultant');
     const cookie = await signInCookie(one, u.email);
     expect((await me(one, cookie)).status).toBe(200);
-    const sid = decodeURIComponent(cookie.split('=')[1]!).slice(2).split('.')[0]!;
+    const sid = sidOf(cookie);
     await one.ctx.db.delete(sessions).where(eq(sessions.sessionId, sid));
     expect(await msUntil(async () => (await me(one, cookie)).status === 401)).toBeLessThan(CACHE_MS + 150);
   });
