@@ -42,7 +42,12 @@ declare module 'autocannon' {
       '5xx': number;
     }
   }
+  interface Instance {
+    /** Each answer: its client, status, bytes and latency in ms. */
+    on(event: 'response', listener: (client: unknown, statusCode: number, resBytes: number, responseTime: number) => void): Instance;
+  }
   function autocannon(opts: autocannon.Options): Promise<autocannon.Result>;
+  function autocannon(opts: autocannon.Options, done: (err: Error | null, result: autocannon.Result) => void): Instance;
   export = autocannon;
 }
 
