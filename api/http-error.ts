@@ -4,7 +4,7 @@ import type { ApiErrorCode, ApiIssue } from '../shared/api-error';
 export class HttpError extends Error {
   constructor(
     readonly status: number,
-    readonly code: ApiErrorCode | string,
+    readonly code: ApiErrorCode,
     message: string,
     readonly issues?: ApiIssue[],
   ) {
