@@ -17,6 +17,8 @@ export const assumptionSchema = z.object({
   ownerId: z.number().int().nullable(),
   ownerName: z.string().nullable(),
   notes: z.string(),
+  /** For a value made from a dataset's fit: that fit's warnings bearing on it (empty otherwise). */
+  cautions: z.array(z.object({ code: z.string(), message: z.string() })),
   /** How many model blocks in draft studies link to it. */
   usageCount: z.number().int(),
   updatedAt: z.string(),

@@ -98,6 +98,8 @@ export const createDatasetAssumptionsSchema = z.object({
   assumptions: z
     .array(
       z.object({
+        /** The suggestion it was made from (fitSuggestions' key): which of the fit's warnings it carries. */
+        key: z.string().max(60).optional(),
         name: z.string().trim().min(1, 'Enter a name').max(ASSUMPTION_NAME_MAX),
         value: z.number({ message: 'Enter a number' }).finite('Enter a finite number'),
         unit: z.enum(UNIT_CODES, { message: 'Choose a unit' }),

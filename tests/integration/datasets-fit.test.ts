@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { eventLogCsv, DEMO_LOG_OPTIONS } from '../../fakes/demo-event-log';
 import { makeEngagement, makeUser, signedIn, startTestApp, type Agent, type TestApp } from './support/test-app';
 import { EVENT_MAPPING, upload, waitForFit } from './datasets-helpers';
+import { doc, modelBlock } from './support/study-fixtures';
 
 let t: TestApp;
 let consultant: Agent;
@@ -115,6 +116,44 @@ describe('PUT /api/datasets/:id/mapping and the fit', () => {
     const again = await consultant.post(`/api/datasets/${fittedId}/assumptions`, { assumptions: [{ name: 'Counter service time', value: 5, unit: 'minutes' }] });
     expect(again.status).toBe(409);
     expect(again.body.error.issues[0].path).toBe('assumptions.0.name');
+  });
+
+  it("carries the fit's cautions into the model blocks that link its values, where they bear on the model", async () => {
+    const fitted = (await waitForFit(consultant, fittedId)).fit as { demand: { warnings: { code: string }[] }; service: { warnings: { code: string }[] } };
+    expect(fitted.service.warnings.map((w) => w.code)).toContain('not_exponential');
+    const made = await consultant.post(`/api/datasets/${fittedId}/assumptions`, {
+      assumptions: [
+        { key: 'service_time_mean', name: 'Cloakroom service time', value: 5.5, unit: 'minutes' },
+        { key: 'arrival_rate_mean', name: 'Cloakroom arrivals, average', value: 20, unit: 'per_hour' },
+      ],
+    });
+    expect(made.status).toBe(201);
+    const byName = (name: string) => (made.body.assumptions as { id: number; name: string; version: number }[]).find((a) => a.name === name)!;
+    const [service, arrivals] = [byName('Cloakroom service time'), byName('Cloakroom arrivals, average')];
+    const study = await consultant.post(`/api/engagements/${engagementId}/studies`, { title: 'Cloakroom cautions', templateKey: null });
+    const link = (id: number) => ({ assumption: id });
+    const spec = { arrivalRate: link(arrivals.id), serviceRate: link(service.id) };
+    const saved = await consultant.put(`/api/studies/${study.body.study.id}/document`, {
+      baseVersion: study.body.study.version,
+      document: doc(
+        modelBlock('mmc-desk', { title: 'Desk', timeUnit: 'hour', spec: { model: 'M/M/c', servers: 3, ...spec } }),
+        modelBlock('mg1-desk', { title: 'Desk, general service', timeUnit: 'hour', spec: { model: 'M/G/1', serviceScv: 0.45, ...spec, arrivalRate: 5 } }),
+      ),
+    });
+    expect(saved.status).toBe(200);
+    const codes = (blockId: string, body = saved.body) => (body.study.blocks[blockId].result.warnings as { code: string; message: string }[]).map((w) => w.code);
+    // M/M/c takes service times to be exponential; the fit rejected that for this data.
+    expect(codes('mmc-desk')).toContain('data_not_exponential');
+    const caution = (saved.body.study.blocks['mmc-desk'].result.warnings as { code: string; message: string }[]).find((w) => w.code === 'data_not_exponential')!;
+    expect(caution.message).toMatch(/^Service rate μ per server is linked to "Cloakroom service time", fitted from data: Service times are clearly not exponential/);
+    // M/G/1 takes the SCV instead: no such caution.
+    expect(codes('mg1-desk')).not.toContain('data_not_exponential');
+    if (fitted.demand.warnings.some((w) => w.code === 'variable_demand')) expect(codes('mmc-desk')).toContain('data_variable_demand');
+
+    // Once the value no longer names the dataset as its source, its cautions leave the blocks too.
+    expect((await consultant.patch(`/api/assumptions/${service.id}`, { sourceKind: 'judgement', version: service.version })).status).toBe(200);
+    const reread = await consultant.get(`/api/studies/${study.body.study.id}`);
+    expect(codes('mmc-desk', reread.body)).not.toContain('data_not_exponential');
   });
 
   it('appends an interval-staffing block built from the profile to a draft study, linked to an assumption', async () => {

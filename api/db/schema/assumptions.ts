@@ -1,4 +1,5 @@
-import { datetime, double, int, mysqlEnum, mysqlTable, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import { datetime, double, int, json, mysqlEnum, mysqlTable, uniqueIndex, varchar } from 'drizzle-orm/mysql-core';
+import type { FitWarning } from '../../../shared/queue/fit/index';
 import { ASSUMPTION_SOURCES } from '../../../shared/schemas/assumptions';
 import { UNIT_CODES } from '../../../shared/units/units';
 import { engagements } from './engagements';
@@ -23,6 +24,12 @@ export const assumptions = mysqlTable(
     sourceDetail: varchar('source_detail', { length: 500 }).notNull().default(''),
     ownerId: int('owner_id').references(() => users.id, { onDelete: 'set null' }),
     notes: varchar('notes', { length: 500 }).notNull().default(''),
+    /**
+     * For a value made from a dataset's fit: the fit's warnings that bear on it (exponential
+     * service rejected, demand more variable than a steady stream, few observations). Model blocks
+     * linking the value repeat those that matter to their model. Null for any other source.
+     */
+    cautions: json('cautions').$type<FitWarning[]>(),
     createdAt: datetime('created_at', { mode: 'date', fsp: 3 }).notNull(),
     updatedAt: datetime('updated_at', { mode: 'date', fsp: 3 }).notNull(),
     version: int('version').notNull().default(1),

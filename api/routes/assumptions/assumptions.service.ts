@@ -28,6 +28,7 @@ const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: nu
   ownerId: a.ownerId,
   ownerName,
   notes: a.notes,
+  cautions: a.sourceKind === 'dataset' ? (a.cautions ?? []) : [],
   usageCount,
   updatedAt: a.updatedAt.toISOString(),
   version: a.version,
@@ -111,7 +112,9 @@ export async function updateAssumption(ctx: AppContext, row: AssumptionRow, patc
         ]);
       }
       const numbersChange = (fields.value !== undefined && fields.value !== row.value) || (fields.unit !== undefined && fields.unit !== row.unit);
-      return numbersChange ? propagateChange(tx, row.engagementId, row.id) : [];
+      // A dataset's cautions hold only while the dataset is the source (register.ts): blocks drop them.
+      const cautionsChange = row.cautions !== null && fields.sourceKind !== undefined && fields.sourceKind !== row.sourceKind;
+      return numbersChange || cautionsChange ? propagateChange(tx, row.engagementId, row.id) : [];
     });
   } catch (err) {
     if (isDuplicate(err)) throw duplicateName(fields.name ?? row.name);

@@ -8,6 +8,7 @@ import { HttpError } from '../../http-error';
 import { listAssumptionsFor } from '../assumptions/assumptions.service';
 import { recordAudit } from '../audit/audit.service';
 import type { DatasetRow } from './dataset-access';
+import { suggestionCautions } from './suggestion-cautions';
 
 const isDuplicate = (err: unknown): boolean => {
   const e = err as { cause?: { code?: string }; code?: string };
@@ -19,7 +20,8 @@ const isDuplicate = (err: unknown): boolean => {
  * dataset as its source. A name already in the register is a 409 naming that row of the form.
  */
 export async function createDatasetAssumptions(ctx: AppContext, dataset: DatasetRow, input: CreateDatasetAssumptions, by: SessionUser, ip?: string): Promise<Assumption[]> {
-  if (dataset.status !== 'fitted') throw new HttpError(409, 'conflict', 'This dataset has no fit yet; wait for the fit to finish.');
+  const fit = dataset.fit;
+  if (dataset.status !== 'fitted' || !fit) throw new HttpError(409, 'conflict', 'This dataset has no fit yet; wait for the fit to finish.');
   const seen = new Map<string, number>();
   input.assumptions.forEach((a, i) => {
     const key = a.name.toLowerCase();
@@ -34,7 +36,11 @@ export async function createDatasetAssumptions(ctx: AppContext, dataset: Dataset
   try {
     await ctx.db.transaction(async (tx) => {
       for (const a of input.assumptions) {
-        const [res] = await tx.insert(assumptions).values({ ...a, engagementId: dataset.engagementId, sourceKind: 'dataset', sourceDetail, ownerId: by.id, createdAt: now, updatedAt: now });
+        const { key, ...value } = a;
+        const cautions = suggestionCautions(fit, key);
+        const [res] = await tx
+          .insert(assumptions)
+          .values({ ...value, cautions: cautions.length > 0 ? cautions : null, engagementId: dataset.engagementId, sourceKind: 'dataset', sourceDetail, ownerId: by.id, createdAt: now, updatedAt: now });
         ids.push(res.insertId);
       }
     });

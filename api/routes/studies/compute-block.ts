@@ -1,6 +1,7 @@
 import { compute, ENGINE_VERSION, QueueError, type SweepResult } from '../../../shared/queue/index';
 import type { BlockConfig, ChartConfig, StudyBlockResult } from '../../../shared/schemas/model-block';
 import { jsonSafe } from './json-safe';
+import { linkCautions } from './link-cautions';
 import { resolveSpec, type Register, type ResolvedSpec } from './resolve-spec';
 
 type Outcome = { result: Record<string, unknown>; error: null } | { result: null; error: { code: string; message: string; issues: { path: string; message: string }[] } };
@@ -39,6 +40,11 @@ function chartRows(spec: Record<string, unknown>, chart: ChartConfig): StudyBloc
 export function computeBlock(blockId: string, config: BlockConfig, register: Register, computedAt = new Date()): StudyBlockResult {
   const base = resolveSpec(config.spec, config.timeUnit, register);
   const main = run(base);
+  const cautions = main.result ? linkCautions(config.spec, register) : [];
+  if (main.result && cautions.length > 0) {
+    const own = Array.isArray(main.result.warnings) ? main.result.warnings : [];
+    main.result = { ...main.result, warnings: [...own, ...cautions] };
+  }
   const ids = new Set(base.assumptionIds);
   const scenarios = config.scenarios.map((s) => {
     const resolved = resolveSpec({ ...config.spec, ...s.overrides, model: config.spec.model }, config.timeUnit, register);

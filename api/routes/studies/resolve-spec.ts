@@ -1,4 +1,5 @@
 import { MODEL_CATALOG, type QueueIssue } from '../../../shared/queue/index';
+import type { FitWarning } from '../../../shared/queue/fit/index';
 import type { TimeUnit, UnitCode } from '../../../shared/units/units';
 import { UNIT_INFO, toFieldValue } from '../../../shared/units/units';
 import { SCALAR_KINDS } from './block-config-check';
@@ -10,6 +11,8 @@ export interface RegisterEntry {
   value: number;
   unit: UnitCode;
   version: number;
+  /** Warnings of the dataset fit the value came from (register.ts); none for other sources. */
+  cautions?: FitWarning[];
 }
 export type Register = ReadonlyMap<number, RegisterEntry>;
 
@@ -21,7 +24,7 @@ export interface ResolvedSpec {
   issues: QueueIssue[];
 }
 
-const linkId = (v: unknown): number | null =>
+export const linkId = (v: unknown): number | null =>
   typeof v === 'object' && v !== null && !Array.isArray(v) && typeof (v as { assumption?: unknown }).assumption === 'number'
     ? (v as { assumption: number }).assumption
     : null;

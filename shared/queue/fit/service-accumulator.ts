@@ -6,6 +6,9 @@ import { testExponential, KS_MAX_SAMPLE, type ExponentialTest } from './exponent
 import type { FitWarning } from './fit-warning';
 import { buildHistogram, type ServiceHistogram } from './service-histogram';
 
+/** A p-value as a reader takes it: below 0.001 it is just that (the test cannot tell more). */
+const pText = (p: number): string => (p < 0.001 ? 'p < 0.001' : `p = ${p.toPrecision(2)}`);
+
 /** Options of createServiceAccumulator. */
 export const serviceOptionsSchema = z
   .object({
@@ -105,7 +108,7 @@ export function createServiceAccumulator(options: z.input<typeof serviceOptionsS
       // Thresholds are common practice.
       if (n < 30) warnings.push({ code: 'small_sample', message: `Only ${n} service times: the mean is rough, the variability (SCV) very uncertain, and the exponential test can hardly reject anything.` });
       if (gof.rejected) {
-        warnings.push({ code: 'not_exponential', message: `Service times are clearly not exponential (KS p = ${gof.pValue.toPrecision(2)}, SCV ${scv.toFixed(2)} where exponential gives 1). Prefer models that take the SCV into account (M/G/1, G/G/c) or check by simulation.` });
+        warnings.push({ code: 'not_exponential', message: `Service times are clearly not exponential (KS ${pText(gof.pValue)}, SCV ${scv.toFixed(2)} where exponential gives 1). Prefer models that take the SCV into account (M/G/1, G/G/c) or check by simulation.` });
       } else if (gof.lillieforsAdjusted.rejected) {
         warnings.push({ code: 'exponential_doubtful', message: `The exponential assumption is doubtful once the estimated mean is allowed for (Lilliefors-adjusted KS, SCV ${scv.toFixed(2)}); treat M/M results as approximate.` });
       }

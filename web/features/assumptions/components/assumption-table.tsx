@@ -69,6 +69,7 @@ export function AssumptionTable({ rows, order, onSort, onEdit, onDelete, deletin
                   {a.sourceDetail}
                 </span>
               )}
+              <FitCautions cautions={a.cautions} />
             </Td>
             <Td className="text-ink-soft">{a.ownerName ?? <span className="text-ink-faint italic">nobody</span>}</Td>
             <Td num>
@@ -94,5 +95,23 @@ export function AssumptionTable({ rows, order, onSort, onEdit, onDelete, deletin
         ))}
       </tbody>
     </Table>
+  );
+}
+
+/** Short names for the fit's warnings a value carries; model blocks that link it repeat them in full. */
+const CAUTION_WORDS: Record<string, string> = {
+  not_exponential: 'service times not exponential',
+  exponential_doubtful: 'exponential service doubtful',
+  variable_demand: 'demand varies by interval',
+  small_sample: 'few observations',
+  few_per_interval: 'few arrivals per interval',
+};
+
+function FitCautions({ cautions }: { cautions: Assumption['cautions'] }) {
+  if (cautions.length === 0) return null;
+  return (
+    <span className="mt-0.5 block text-xs text-warn" title={cautions.map((c) => c.message).join('\n')}>
+      Fit cautions: {cautions.map((c) => CAUTION_WORDS[c.code] ?? c.code).join('; ')}
+    </span>
   );
 }

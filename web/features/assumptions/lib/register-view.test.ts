@@ -13,6 +13,7 @@ const row = (over: Partial<Assumption>): Assumption => ({
   ownerId: null,
   ownerName: null,
   notes: '',
+  cautions: [],
   usageCount: 0,
   updatedAt: '2030-01-01T00:00:00.000Z',
   version: 1,

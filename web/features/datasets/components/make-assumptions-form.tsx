@@ -26,7 +26,7 @@ export function MakeAssumptionsForm({ datasetId, engagementId, suggestions }: { 
     e.preventDefault();
     setErrors({});
     setMessage(null);
-    const body = { assumptions: chosen.map(({ r }) => ({ name: r.name, value: Number(r.text), unit: r.unit, notes: r.notes })) };
+    const body = { assumptions: chosen.map(({ r }) => ({ key: r.key, name: r.name, value: Number(r.text), unit: r.unit, notes: r.notes })) };
     create.mutate(body, {
       onError: (err) => {
         if (!isApiError(err)) return setMessage('Not saved.');

@@ -1,0 +1,1 @@
+ALTER TABLE `assumptions` ADD `cautions` json;
