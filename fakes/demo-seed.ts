@@ -1,5 +1,5 @@
 /**
- * Demo data: an invented consultancy and three invented client engagements. Runs once (it
+ * Demo data: an invented consultancy, three invented client engagements and two draft studies. Runs once (it
  * checks for the demo admin first), so a second start keeps whatever people changed.
  */
 import { eq } from 'drizzle-orm';
@@ -7,6 +7,7 @@ import type { Role } from '../shared/schemas/roles';
 import { hashPassword } from '../api/auth/passwords';
 import type { Db } from '../api/db/client';
 import { engagements, memberships, users } from '../api/db/schema/index';
+import { seedDemoStudies } from './demo-studies-seed';
 
 export const DEMO_USERS: { email: string; name: string; role: Role }[] = [
   { email: 'admin@sojourn.test', name: 'Ines Calloway', role: 'admin' },
@@ -70,5 +71,6 @@ export async function seedDemo(db: Db, password: string): Promise<boolean> {
       await db.insert(memberships).values({ engagementId: res.insertId, userId: ids.get(email)!, addedAt: now });
     }
   }
+  await seedDemoStudies(db);
   return true;
 }

@@ -51,7 +51,7 @@ async function ensureAssumptions(tx: Tx, engagementId: number, template: ParsedT
  * document goes through the same sanitising and recompute as any save, in one transaction.
  */
 export async function createStudy(
-  ctx: AppContext,
+  ctx: Pick<AppContext, 'db'>,
   engagement: EngagementRow,
   input: CreateStudy,
   by: SessionUser,

@@ -7,7 +7,7 @@ import type { EngagementRow } from '../engagements/engagement-access';
 import { readStudyBlockResults } from './block-rows';
 import { author, editor, type LoadedStudy, type StudyHead } from './study-access';
 
-const summaryQuery = (ctx: AppContext) =>
+const summaryQuery = (ctx: Pick<AppContext, 'db'>) =>
   ctx.db
     .select({ s: studies, authorName: author.name, updatedByName: editor.name })
     .from(studies)
@@ -38,7 +38,7 @@ export const studySummary = (l: LoadedStudy<StudyHead>): StudySummary => toSumma
  * A study with its document and the server's results per block, after a change (the read of an
  * unchanged study is study-read.ts). `blocks` may be passed when the caller has just computed them.
  */
-export async function describeStudy(ctx: AppContext, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[]): Promise<StudyDetail> {
+export async function describeStudy(ctx: Pick<AppContext, 'db'>, studyId: number, engagement: EngagementRow, blocks?: StudyBlockResult[]): Promise<StudyDetail> {
   const [row] = await summaryQuery(ctx).where(eq(studies.id, studyId));
   const results = blocks ?? (await readStudyBlockResults(ctx.db, studyId));
   return {
