@@ -240,6 +240,8 @@ describe("a newcomer's journey from a new engagement to a verified deliverable",
     await page.getByRole('button', { name: 'Submit for review' }).click();
     const confirm = page.getByRole('dialog', { name: 'Submit as revision 1?' });
     await confirm.waitFor();
+    // The study keeps the template's guidance and placeholders: the author is told, not stopped.
+    await confirm.getByRole('alert').filter({ hasText: 'Template text left in the study' }).getByText(/placeholders? still to fill in \(\[number\]/).waitFor();
     await shotAround(confirm, '15-submit-confirm');
     await confirm.getByRole('button', { name: 'Submit revision 1' }).click();
     const submitted = page.getByRole('dialog', { name: 'Revision 1 submitted' });

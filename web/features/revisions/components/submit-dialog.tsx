@@ -3,9 +3,12 @@ import { Link } from 'react-router-dom';
 import { paths } from '../../../app/paths';
 import { Banner } from '../../../components/ui/banner';
 import { Button } from '../../../components/ui/button';
+import type { TemplateLeftovers } from '#shared/editor/template-leftovers';
 
 interface SubmitDialogProps {
   number: number;
+  /** Template scaffolding still in the text: said before submitting, not a refusal. */
+  leftovers: TemplateLeftovers;
   working: boolean;
   error: string | null;
   submitted: { id: number; number: number } | null;
@@ -17,7 +20,7 @@ interface SubmitDialogProps {
  * The confirmation before submitting, then its outcome, in a native modal <dialog> (focus kept
  * inside, Escape closes, focus returns to the button that opened it).
  */
-export function SubmitDialog({ number, working, error, submitted, onConfirm, onClose }: SubmitDialogProps) {
+export function SubmitDialog({ number, leftovers, working, error, submitted, onConfirm, onClose }: SubmitDialogProps) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   useEffect(() => {
@@ -57,6 +60,7 @@ export function SubmitDialog({ number, working, error, submitted, onConfirm, onC
               as they are now. A partner then reads it and signs it off or asks for changes.
             </p>
             <p className="text-ink-soft">Anything not yet saved is saved first.</p>
+            <LeftoversNotice leftovers={leftovers} />
             {error && (
               <Banner tone="danger" title="Not submitted">
                 {error}
@@ -74,5 +78,23 @@ export function SubmitDialog({ number, working, error, submitted, onConfirm, onC
         )}
       </div>
     </dialog>
+  );
+}
+
+const plural = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
+
+/** What of the template is still in the text; it would reach the partner and, once released, the client's PDF. */
+function LeftoversNotice({ leftovers }: { leftovers: TemplateLeftovers }) {
+  const { guidance, placeholders } = leftovers;
+  if (guidance === 0 && placeholders.length === 0) return null;
+  const parts = [
+    guidance > 0 && `${plural(guidance, 'paragraph', 'paragraphs')} of template guidance (starting “Guidance:”)`,
+    placeholders.length > 0 && `${plural(placeholders.length, 'placeholder', 'placeholders')} still to fill in (${placeholders.slice(0, 4).join(', ')}${placeholders.length > 4 ? ', …' : ''})`,
+  ].filter(Boolean);
+  return (
+    <Banner tone="warn" title="Template text left in the study">
+      The text still holds {parts.join(' and ')}. They go into the revision as they are, and into the client’s PDF if it is released. You can
+      submit anyway, or cancel and replace them first.
+    </Banner>
   );
 }

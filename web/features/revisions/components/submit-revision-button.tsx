@@ -1,5 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { templateLeftovers, type TemplateLeftovers } from '#shared/editor/template-leftovers';
 import type { StudyDetail } from '#shared/schemas/studies';
 import { Button } from '../../../components/ui/button';
 import { studyRevisionsQuery } from '../api/revision-queries';
@@ -11,6 +12,8 @@ interface SubmitRevisionButtonProps {
   /** The editor's save state and its "save now", so the submission is the text on screen. */
   saveStatus: string;
   saveNow: () => Promise<void>;
+  /** The text on screen, checked for template guidance and placeholders left in it. */
+  currentDocument: () => unknown;
   /** Called when the outcome dialog closes after a submission, to reload the study with its new status. */
   onSubmitted: () => Promise<void>;
 }
@@ -21,11 +24,12 @@ const wait = (ms: number) => new Promise((r) => window.setTimeout(r, ms));
  * "Submit for review" in the editor: confirms which revision number the text becomes, flushes
  * any pending save first, then submits with the saved version so nothing unseen goes along.
  */
-export function SubmitRevisionButton({ studyId, saveStatus, saveNow, onSubmitted }: SubmitRevisionButtonProps) {
+export function SubmitRevisionButton({ studyId, saveStatus, saveNow, currentDocument, onSubmitted }: SubmitRevisionButtonProps) {
   const qc = useQueryClient();
   const revisions = useQuery(studyRevisionsQuery(studyId));
   const submit = useSubmitRevision(studyId);
   const [open, setOpen] = useState(false);
+  const [leftovers, setLeftovers] = useState<TemplateLeftovers>({ guidance: 0, placeholders: [] });
   const [flushError, setFlushError] = useState<string | null>(null);
   const [flushing, setFlushing] = useState(false);
   const status = useRef(saveStatus);
@@ -57,12 +61,13 @@ export function SubmitRevisionButton({ studyId, saveStatus, saveNow, onSubmitted
 
   return (
     <>
-      <Button variant="primary" size="sm" onClick={() => { submit.reset(); setFlushError(null); setOpen(true); }}>
+      <Button variant="primary" size="sm" onClick={() => { submit.reset(); setFlushError(null); setLeftovers(templateLeftovers(currentDocument())); setOpen(true); }}>
         Submit for review
       </Button>
       {open && (
         <SubmitDialog
           number={next}
+          leftovers={leftovers}
           working={flushing || submit.isPending}
           error={flushError ?? submit.error?.message ?? null}
           submitted={submit.data ? { id: submit.data.id, number: submit.data.number } : null}

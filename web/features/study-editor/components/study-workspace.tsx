@@ -60,7 +60,7 @@ export function StudyWorkspace({ study, onReload }: { study: StudyDetail; onRelo
           <Link to={paths.studyRevisions(study.id)} className="underline-offset-4 hover:underline">
             Revisions
           </Link>
-          {SUBMITTABLE.has(study.status) && <SubmitRevisionButton studyId={study.id} saveStatus={autosave.status} saveNow={autosave.saveNow} onSubmitted={onReload} />}
+          {SUBMITTABLE.has(study.status) && <SubmitRevisionButton studyId={study.id} saveStatus={autosave.status} saveNow={autosave.saveNow} currentDocument={autosave.currentDocument} onSubmitted={onReload} />}
           <Link to={paths.studyReader(study.id)} className="rounded-md border border-rule-strong px-3 py-1.5 text-ink no-underline hover:border-ink-soft">
             Reading view
           </Link>
