@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shownName } from './shown-name';
 import { UNIT_CODES } from '../units/units';
 
 export const ASSUMPTION_NAME_MAX = 120;
@@ -26,7 +27,7 @@ export const assumptionSchema = z.object({
 });
 
 const fields = {
-  name: z.string().trim().min(1, 'Enter a name').max(ASSUMPTION_NAME_MAX),
+  name: shownName('Enter a name', ASSUMPTION_NAME_MAX),
   value: z.number({ message: 'Enter a number' }).finite('Enter a finite number'),
   unit: z.enum(UNIT_CODES, { message: 'Choose a unit' }),
   sourceKind: z.enum(ASSUMPTION_SOURCES, { message: 'Choose where it comes from' }),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shownName } from './shown-name';
 import { ROLES } from './roles';
 
 export const PASSWORD_MIN = 10;
@@ -21,7 +22,7 @@ export const passwordResetConfirmSchema = z.object({
   password: newPassword,
 });
 export const invitationAcceptSchema = z.object({
-  name: z.string().trim().min(1, 'Enter your name').max(120),
+  name: shownName('Enter your name', 120),
   password: newPassword,
 });
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shownName } from './shown-name';
 import { UNIT_CODES } from '../units/units';
 import { ASSUMPTION_NAME_MAX, ASSUMPTION_TEXT_MAX } from './assumptions';
 import { STAFFING_CRITERIA } from '../queue/spec';
@@ -100,7 +101,7 @@ export const createDatasetAssumptionsSchema = z.object({
       z.object({
         /** The suggestion it was made from (fitSuggestions' key): which of the fit's warnings it carries. */
         key: z.string().max(60).optional(),
-        name: z.string().trim().min(1, 'Enter a name').max(ASSUMPTION_NAME_MAX),
+        name: shownName('Enter a name', ASSUMPTION_NAME_MAX),
         value: z.number({ message: 'Enter a number' }).finite('Enter a finite number'),
         unit: z.enum(UNIT_CODES, { message: 'Choose a unit' }),
         notes: z.string().trim().max(ASSUMPTION_TEXT_MAX).default(''),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shownName } from './shown-name';
 import { ROLES } from './roles';
 
 export const ENGAGEMENT_NAME_MAX = 160;
@@ -20,16 +21,16 @@ export const engagementSchema = z.object({
 });
 
 export const createEngagementSchema = z.object({
-  name: z.string().trim().min(1, 'Enter a name').max(ENGAGEMENT_NAME_MAX),
-  clientName: z.string().trim().min(1, 'Enter the client').max(CLIENT_NAME_MAX),
+  name: shownName('Enter a name', ENGAGEMENT_NAME_MAX),
+  clientName: shownName('Enter the client', CLIENT_NAME_MAX),
   description: z.string().trim().max(DESCRIPTION_MAX).default(''),
   safetyCritical: z.boolean().default(false),
 });
 
 export const updateEngagementSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter a name').max(ENGAGEMENT_NAME_MAX),
-    clientName: z.string().trim().min(1, 'Enter the client').max(CLIENT_NAME_MAX),
+    name: shownName('Enter a name', ENGAGEMENT_NAME_MAX),
+    clientName: shownName('Enter the client', CLIENT_NAME_MAX),
     description: z.string().trim().max(DESCRIPTION_MAX),
     safetyCritical: z.boolean(),
     status: z.enum(['active', 'archived']),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shownName } from './shown-name';
 import { UNIT_CODES } from '../units/units';
 import { ASSUMPTION_NAME_MAX, ASSUMPTION_SOURCES } from './assumptions';
 import { studyBlockResultSchema } from './model-block';
@@ -47,7 +48,7 @@ export const studyDetailSchema = studySummarySchema.extend({
 });
 
 export const createStudySchema = z.object({
-  title: z.string().trim().min(1, 'Enter a title').max(STUDY_TITLE_MAX),
+  title: shownName('Enter a title', STUDY_TITLE_MAX),
   /** A key from GET /api/templates, or null for a blank study. */
   templateKey: z.string().max(80).nullable().default(null),
 });
@@ -55,7 +56,7 @@ export const createStudySchema = z.object({
 export const saveDocumentSchema = z.object({
   document: documentSchema,
   baseVersion: z.number().int().min(1),
-  title: z.string().trim().min(1, 'Enter a title').max(STUDY_TITLE_MAX).optional(),
+  title: shownName('Enter a title', STUDY_TITLE_MAX).optional(),
 });
 
 export const templateSummarySchema = z.object({

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { shownName } from './shown-name';
 import { ROLES } from './roles';
 import { EMAIL_MAX } from './auth';
 
@@ -17,13 +18,13 @@ export const userSchema = z.object({
 
 export const inviteUserSchema = z.object({
   email: z.string().trim().toLowerCase().max(EMAIL_MAX).email('Enter a valid e-mail address'),
-  name: z.string().trim().min(1, 'Enter a name').max(NAME_MAX),
+  name: shownName('Enter a name', NAME_MAX),
   role: z.enum(ROLES, { message: 'Choose a role' }),
 });
 
 export const updateUserSchema = z
   .object({
-    name: z.string().trim().min(1, 'Enter a name').max(NAME_MAX),
+    name: shownName('Enter a name', NAME_MAX),
     role: z.enum(ROLES, { message: 'Choose a role' }),
     active: z.boolean(),
   })

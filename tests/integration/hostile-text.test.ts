@@ -12,6 +12,10 @@ import { tokenFromMail } from './support/mailbox';
 import { agent, makeEngagement, makeUser, signedIn, startTestApp, unique, type Agent, type TestApp } from './support/test-app';
 import { deskBlock, doc, heading, paragraph } from './support/study-fixtures';
 import { memberships } from '../../api/db/schema/index';
+import { withoutInvisible } from '../../shared/schemas/shown-name';
+
+/** A name or title as stored: characters that reorder or hide text are removed (shown-name.ts). */
+const shown = (text: string): string => withoutInvisible(text).trim();
 
 let t: TestApp;
 let admin: Agent;
@@ -61,15 +65,15 @@ describe('people', () => {
 });
 
 describe('engagements', () => {
-  it.each(XSS_PAYLOADS.map((p) => [p.key, p] as const))('stores %s in the name, client and description as typed (create and edit)', async (_key, p) => {
+  it.each(XSS_PAYLOADS.map((p) => [p.key, p] as const))('stores %s in the name, client and description as typed, names without reordering marks (create and edit)', async (_key, p) => {
     const created = await admin.post('/api/engagements', { name: p.text, clientName: p.text, description: p.text });
     expect(created.status).toBe(201);
     const id = created.body.engagement.id as number;
-    expect((await admin.get(`/api/engagements/${id}`)).body.engagement).toMatchObject({ name: p.text, clientName: p.text, description: p.text });
+    expect((await admin.get(`/api/engagements/${id}`)).body.engagement).toMatchObject({ name: shown(p.text), clientName: shown(p.text), description: p.text });
     const edited = await admin.patch(`/api/engagements/${id}`, { description: `Edited: ${p.text}`, version: created.body.engagement.version });
     expect(edited.status).toBe(200);
     const listed = (await admin.get('/api/engagements')).body.engagements.find((e: { id: number }) => e.id === id);
-    expect(listed).toMatchObject({ name: p.text, clientName: p.text, description: `Edited: ${p.text}` });
+    expect(listed).toMatchObject({ name: shown(p.text), clientName: shown(p.text), description: `Edited: ${p.text}` });
   });
 });
 
@@ -83,24 +87,24 @@ describe('studies, assumptions, comments and decisions', () => {
     writer = await signedIn(t.app, w.email);
   });
 
-  it.each(XSS_PAYLOADS.map((p) => [p.key, p] as const))('keeps %s as a study title (create, save, list)', async (_key, p) => {
+  it.each(XSS_PAYLOADS.map((p) => [p.key, p] as const))('keeps %s as a study title, without reordering marks (create, save, list)', async (_key, p) => {
     const created = await writer.post(`/api/engagements/${otherEngagement}/studies`, { title: p.text, templateKey: null });
     expect(created.status).toBe(201);
-    expect(created.body.study.title).toBe(p.text);
+    expect(created.body.study.title).toBe(shown(p.text));
     const saved = await writer.put(`/api/studies/${created.body.study.id}/document`, { document: doc(paragraph('x')), baseVersion: 1, title: `Saved ${p.text}` });
-    expect(saved.body.study.title).toBe(`Saved ${p.text}`);
+    expect(saved.body.study.title).toBe(`Saved ${shown(p.text)}`);
     const list = (await writer.get(`/api/engagements/${otherEngagement}/studies`)).body.studies as { id: number; title: string }[];
-    expect(list.find((s) => s.id === created.body.study.id)!.title).toBe(`Saved ${p.text}`);
+    expect(list.find((s) => s.id === created.body.study.id)!.title).toBe(`Saved ${shown(p.text)}`);
   });
 
   it.each(XSS_PAYLOADS.map((p) => [p.key, p] as const))('keeps %s in an assumption name, source and notes (create, edit, list)', async (_key, p) => {
     const created = await writer.post(`/api/engagements/${otherEngagement}/assumptions`, { name: p.text, value: 12, unit: 'per_hour', sourceKind: 'client', sourceDetail: p.text, notes: p.text });
     expect(created.status).toBe(201);
-    expect(created.body.assumption).toMatchObject({ name: p.text, sourceDetail: p.text, notes: p.text });
+    expect(created.body.assumption).toMatchObject({ name: shown(p.text), sourceDetail: p.text, notes: p.text });
     const edited = await writer.patch(`/api/assumptions/${created.body.assumption.id}`, { notes: `Checked: ${p.text}`, version: created.body.assumption.version });
     expect(edited.status).toBe(200);
     const listed = (await writer.get(`/api/engagements/${otherEngagement}/assumptions`)).body.assumptions.find((a: { id: number }) => a.id === created.body.assumption.id);
-    expect(listed).toMatchObject({ name: p.text, sourceDetail: p.text, notes: `Checked: ${p.text}` });
+    expect(listed).toMatchObject({ name: shown(p.text), sourceDetail: p.text, notes: `Checked: ${p.text}` });
   });
 
   it('refuses a payload in a closed-choice field (unit, source) naming the field, storing nothing', async () => {
