@@ -186,3 +186,13 @@ export const MODEL_CATALOG: ModelCatalogEntry[] = [
     measures: [],
   },
 ];
+
+/**
+ * A field's kind for units and links: a solver's `target` takes its kind from the criterion (a
+ * mean-wait target is a duration in the block's time unit; service level, blocking, utilisation
+ * and abandonment targets are shares, so 80 % links as 0.8). Browser preview and server use this one rule.
+ */
+export function inputKind(field: Pick<InputField, 'name' | 'kind'>, criterion: unknown): FieldKind {
+  if (field.name !== 'target') return field.kind;
+  return criterion === 'meanWait' ? 'duration' : 'probability';
+}

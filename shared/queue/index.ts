@@ -11,7 +11,7 @@ export { QueueError, invalidInput, unstable, type QueueErrorCode, type QueueErro
 export * from './limits';
 export * from './spec';
 export type * from './result';
-export { MODEL_CATALOG, type FieldKind, type InputField, type MeasureField, type ModelCatalogEntry } from './catalog';
+export { inputKind, MODEL_CATALOG, type FieldKind, type InputField, type MeasureField, type ModelCatalogEntry } from './catalog';
 
 export { mm1 } from './models/mm1';
 export { mmc, mmcMeasures } from './models/mmc';

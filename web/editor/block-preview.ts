@@ -1,4 +1,4 @@
-import { compute, MODEL_CATALOG, QueueError } from '#shared/queue/index';
+import { compute, inputKind, MODEL_CATALOG, QueueError } from '#shared/queue/index';
 import type { Assumption } from '#shared/schemas/assumptions';
 import { isAssumptionLink, type BlockConfig, type StudyBlockResult } from '#shared/schemas/model-block';
 import { toFieldValue, type TimeUnit } from '#shared/units/units';
@@ -8,8 +8,7 @@ type Outcome = Pick<StudyBlockResult, 'status' | 'resolvedSpec' | 'result' | 'er
 
 /** The catalog kind of an input, with a solver's `target` typed by its criterion. */
 export function fieldKind(model: string, name: string, criterion?: unknown): string {
-  if (name === 'target') return criterion === 'meanWait' ? 'duration' : 'probability';
-  return MODEL_CATALOG.find((m) => m.model === model)?.inputs.find((f) => f.name === name)?.kind ?? 'number';
+  return inputKind({ name, kind: MODEL_CATALOG.find((m) => m.model === model)?.inputs.find((f) => f.name === name)?.kind ?? 'number' }, criterion);
 }
 
 /**

@@ -20,6 +20,19 @@ describe('computeBlock', () => {
     expect(out.assumptionIds).toEqual([1, 2]);
   });
 
+  it("types a solver's target by its criterion, as the browser preview does: 80 % is 0.8, a 20-second wait a duration", () => {
+    const reg = register({ id: 4, name: 'Service level target', value: 80, unit: 'percent' }, { id: 5, name: 'Acceptable mean wait', value: 20, unit: 'seconds' });
+    const level = computeBlock('blockA1', config({ timeUnit: 'minute', spec: { model: 'staffing', arrivalRate: 10, serviceRate: 1, criterion: 'serviceLevel', target: { assumption: 4 }, t: 0.5 } }), reg);
+    expect(level.status).toBe('ok');
+    expect(level.resolvedSpec!.target).toBe(0.8);
+    const wait = computeBlock('blockA1', config({ timeUnit: 'minute', spec: { model: 'staffing', arrivalRate: 10, serviceRate: 1, criterion: 'meanWait', target: { assumption: 5 } } }), reg);
+    expect(wait.status).toBe('ok');
+    expect(wait.resolvedSpec!.target).toBeCloseTo(1 / 3, 12);
+    // A wait in seconds cannot be a service level: refused naming the input.
+    const wrong = computeBlock('blockA1', config({ spec: { model: 'staffing', arrivalRate: 10, serviceRate: 1, criterion: 'serviceLevel', target: { assumption: 5 }, t: 0.5 } }), reg);
+    expect(wrong.error!.issues[0].path).toBe('target');
+  });
+
   it('gives the block an error naming the input when a link cannot fit', () => {
     const reg = register({ id: 3, name: 'Agent cost', value: 30, unit: 'currency_per_hour' });
     const out = computeBlock('blockA1', config({ spec: { model: 'M/M/1', arrivalRate: { assumption: 3 }, serviceRate: 4 } }), reg);

@@ -1,4 +1,4 @@
-import { MODEL_CATALOG, type QueueIssue } from '../../../shared/queue/index';
+import { inputKind, MODEL_CATALOG, type QueueIssue } from '../../../shared/queue/index';
 import type { FitWarning } from '../../../shared/queue/fit/index';
 import type { TimeUnit, UnitCode } from '../../../shared/units/units';
 import { UNIT_INFO, toFieldValue } from '../../../shared/units/units';
@@ -53,13 +53,14 @@ export function resolveSpec(input: Record<string, unknown>, timeUnit: TimeUnit, 
       continue;
     }
     assumptionIds.push(id);
-    if (!field || !SCALAR_KINDS.has(field.kind)) {
+    const kind = field ? inputKind(field, input.criterion) : null;
+    if (!field || !kind || !SCALAR_KINDS.has(kind)) {
       issues.push({ path: name, message: `${label}: ${entry ? `${entry.model} has no single-number input here` : 'unknown model'}, so "${a.name}" cannot be linked` });
       continue;
     }
-    const v = toFieldValue(a.value, a.unit, field.kind, timeUnit);
+    const v = toFieldValue(a.value, a.unit, kind, timeUnit);
     if (v === null) {
-      issues.push({ path: name, message: `${label}: "${a.name}" is in ${UNIT_INFO[a.unit].label}, which cannot feed a ${field.kind} input` });
+      issues.push({ path: name, message: `${label}: "${a.name}" is in ${UNIT_INFO[a.unit].label}, which cannot feed a ${kind} input` });
       continue;
     }
     spec[name] = v;
