@@ -1,4 +1,4 @@
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq, getTableColumns, sql } from 'drizzle-orm';
 import type { Assumption, CreateAssumption, MovedNumber, UpdateAssumption } from '../../../shared/schemas/assumptions';
 import type { SessionUser } from '../../../shared/schemas/auth';
 import type { AppContext } from '../../context';
@@ -14,10 +14,17 @@ import { propagateChange } from './propagate-change';
 
 export type AssumptionRow = typeof assumptions.$inferSelect;
 
-/** Assumptions with their owner's name and how many draft-study blocks link each. */
-const query = (db: Db) => db.select({ a: assumptions, ownerName: users.name, usage: usageCount }).from(assumptions).leftJoin(users, eq(users.id, assumptions.ownerId));
+/** Names in the order of the column's case-insensitive collation, near enough for a list. */
+const byName = new Intl.Collator('en', { sensitivity: 'base', numeric: true });
 
-const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: number): Assumption => ({
+/** The register's columns; the cautions apart, as `a` is null where an engagement has none. */
+const { cautions: _cautions, ...listed } = getTableColumns(assumptions);
+const selected = { a: listed, cautions: assumptions.cautions, ownerName: users.name, usage: usageCount };
+
+/** Assumptions with their owner's name and how many draft-study blocks link each. */
+const query = (db: Db) => db.select(selected).from(assumptions).leftJoin(users, eq(users.id, assumptions.ownerId));
+
+const toAssumption = ({ a, cautions, ownerName, usage }: { a: Omit<AssumptionRow, 'cautions'>; cautions: AssumptionRow['cautions']; ownerName: string | null; usage: number }): Assumption => ({
   id: a.id,
   engagementId: a.engagementId,
   name: a.name,
@@ -28,8 +35,8 @@ const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: nu
   ownerId: a.ownerId,
   ownerName,
   notes: a.notes,
-  cautions: a.sourceKind === 'dataset' ? (a.cautions ?? []) : [],
-  usageCount,
+  cautions: a.sourceKind === 'dataset' ? (cautions ?? []) : [],
+  usageCount: usage,
   updatedAt: a.updatedAt.toISOString(),
   version: a.version,
 });
@@ -41,13 +48,12 @@ const toAssumption = (a: AssumptionRow, ownerName: string | null, usageCount: nu
  */
 const registerWithAccess = preparedPer((db: Db) =>
   db
-    .select({ memberId: memberships.userId, a: assumptions, ownerName: users.name, usage: usageCount })
+    .select({ memberId: memberships.userId, ...selected })
     .from(engagements)
     .leftJoin(memberships, and(eq(memberships.engagementId, engagements.id), eq(memberships.userId, sql.placeholder('userId'))))
     .leftJoin(assumptions, eq(assumptions.engagementId, engagements.id))
     .leftJoin(users, eq(users.id, assumptions.ownerId))
     .where(eq(engagements.id, sql.placeholder('engagementId')))
-    .orderBy(assumptions.name)
     .prepare(),
 );
 
@@ -56,13 +62,15 @@ export async function listAssumptionsFor(ctx: AppContext, user: SessionUser, eng
   assertStudyRole(user, 'read');
   const rows = await registerWithAccess(ctx.db).execute({ userId: user.id, engagementId });
   if (!rows[0] || !seesEngagement(user, rows[0].memberId)) throw notFound('That engagement');
-  return rows.flatMap((r) => (r.a ? [toAssumption(r.a, r.ownerName, r.usage)] : []));
+  // Sorted here, not by MariaDB: with the JSON column in the select, its sort goes through a
+  // temporary table on disk, which tripled the database's time per register read under load.
+  return rows.flatMap((r) => (r.a ? [toAssumption({ ...r, a: r.a })] : [])).sort((x, y) => byName.compare(x.name, y.name));
 }
 
 async function describe(ctx: AppContext, id: number): Promise<Assumption> {
   const [r] = await query(ctx.db).where(eq(assumptions.id, id));
   if (!r) throw notFound('That assumption');
-  return toAssumption(r.a, r.ownerName, r.usage);
+  return toAssumption(r);
 }
 
 /** An owner must be a member of the engagement (the register names people the client knows). */
