@@ -79,15 +79,17 @@ export function createApp(ctx: AppContext): Express {
     next();
   });
 
-  api.use(healthRouter(ctx));
+  // A request walks the routers in this order until a route matches (no two routers share a
+  // method and path), so the editor's constant traffic (compute, study, register) comes first.
+  api.use(computeRouter(ctx));
+  api.use(studiesRouter(ctx));
+  api.use(assumptionsRouter(ctx));
   api.use(authRouter(ctx, passport));
+  api.use(healthRouter(ctx));
   api.use(invitationsRouter(ctx));
   api.use(usersRouter(ctx));
   api.use(engagementsRouter(ctx));
-  api.use(studiesRouter(ctx));
-  api.use(assumptionsRouter(ctx));
   api.use(datasetsRouter(ctx));
-  api.use(computeRouter(ctx));
   api.use(auditRouter(ctx));
   api.use(mailboxRouter(ctx));
   api.use(simulationsRouter());
