@@ -1,6 +1,6 @@
 /**
- * Demo data: an invented consultancy, three invented client engagements and two draft studies. Runs once (it
- * checks for the demo admin first), so a second start keeps whatever people changed.
+ * Demo data: an invented consultancy, three invented client engagements and two draft studies.
+ * Runs once (it checks for the demo admin first), so a second start keeps what people changed.
  */
 import { eq } from 'drizzle-orm';
 import type { Role } from '../shared/schemas/roles';

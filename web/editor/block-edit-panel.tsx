@@ -1,5 +1,5 @@
 import { useEffect, useId, useRef } from 'react';
-import { MODEL_CATALOG, type ModelName } from '#shared/queue/index';
+import { inputKind, MODEL_CATALOG, type ModelName } from '#shared/queue/index';
 import { BLOCK_TITLE_MAX, type BlockConfig } from '#shared/schemas/model-block';
 import { TIME_UNITS, type TimeUnit } from '#shared/units/units';
 import { inputClass } from '../components/ui/field';
@@ -8,7 +8,6 @@ import { blockForModel } from './block-defaults';
 import { BlockInputField } from './block-input-field';
 import { changeBlockTimeUnit } from './block-time-unit';
 import { ChartSettings } from './chart-settings';
-import { kindOf } from './editable-inputs';
 import { ScenariosEditor } from './scenarios-editor';
 import { ShownMeasures } from './shown-measures';
 
@@ -117,7 +116,7 @@ export function BlockEditPanel({ config, fieldErrors, onChange, onClose }: Block
           <BlockInputField
             key={`${spec.model}-${config.timeUnit}-${f.name}`}
             field={f}
-            kind={kindOf(f, spec.criterion)}
+            kind={inputKind(f, spec.criterion)}
             value={spec[f.name]}
             timeUnit={config.timeUnit}
             error={fieldErrors[f.name]}

@@ -1,8 +1,9 @@
+import { inputKind } from '#shared/queue/index';
 import type { BlockConfig, ChartConfig } from '#shared/schemas/model-block';
 import { CheckboxField } from '../components/ui/checkbox-field';
 import { inputClass } from '../components/ui/field';
 import { SelectField } from '../components/ui/select-field';
-import { kindOf, numericInputs } from './editable-inputs';
+import { numericInputs } from './editable-inputs';
 import { fromDisplay, initialDisplayUnit, tidy, toDisplay, unitWord } from './field-units';
 import { NumberInput } from './number-input';
 import { measuresFor } from './result-rows';
@@ -28,7 +29,7 @@ export function ChartSettings({ config, onChange }: { config: BlockConfig; onCha
 
   const defaultMeasures = measures.slice(0, 2).map((m) => m.name);
   const param = chart ? inputs.find((f) => f.name === chart.parameter) : undefined;
-  const kind = param ? kindOf(param, spec.criterion) : 'number';
+  const kind = param ? inputKind(param, spec.criterion) : 'number';
   const unit = initialDisplayUnit(kind, chart?.from, timeUnit);
   const word = unitWord(kind, unit, timeUnit);
   const show = (v: number) => tidy(toDisplay(v, kind, unit, timeUnit));

@@ -1,4 +1,4 @@
-import { inputKind, MODEL_CATALOG, type InputField } from '#shared/queue/index';
+import { MODEL_CATALOG, type InputField } from '#shared/queue/index';
 
 /** Input kinds a scenario may override or a chart may vary: single numbers. */
 const NUMERIC = new Set(['rate', 'duration', 'count', 'probability', 'scv', 'cost', 'number']);
@@ -7,6 +7,3 @@ const NUMERIC = new Set(['rate', 'duration', 'count', 'probability', 'scv', 'cos
 export function numericInputs(model: string): InputField[] {
   return (MODEL_CATALOG.find((m) => m.model === model)?.inputs ?? []).filter((f) => NUMERIC.has(f.kind));
 }
-
-/** A field's kind, with a solver's `target` typed by its criterion (shared with the server). */
-export const kindOf = (field: InputField, criterion: unknown): string => inputKind(field, criterion);

@@ -1,7 +1,8 @@
+import { inputKind } from '#shared/queue/index';
 import { MAX_SCENARIOS, isAssumptionLink, type BlockConfig } from '#shared/schemas/model-block';
 import { inputClass } from '../components/ui/field';
 import { Button } from '../components/ui/button';
-import { kindOf, numericInputs } from './editable-inputs';
+import { numericInputs } from './editable-inputs';
 import { fromDisplay, initialDisplayUnit, tidy, toDisplay, unitWord } from './field-units';
 import { NumberInput } from './number-input';
 
@@ -46,7 +47,7 @@ export function ScenariosEditor({ config, onChange }: ScenariosEditorProps) {
             </thead>
             <tbody>
               {inputs.map((f) => {
-                const kind = kindOf(f, spec.criterion);
+                const kind = inputKind(f, spec.criterion);
                 const unit = initialDisplayUnit(kind, spec[f.name], timeUnit);
                 const word = unitWord(kind, unit, timeUnit);
                 return (

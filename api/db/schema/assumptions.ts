@@ -27,7 +27,8 @@ export const assumptions = mysqlTable(
     /**
      * For a value made from a dataset's fit: the fit's warnings that bear on it (exponential
      * service rejected, demand more variable than a steady stream, few observations). Model blocks
-     * linking the value repeat those that matter to their model. Null for any other source.
+     * linking the value repeat those that matter to their model. Null for any other source, and
+     * cleared when the value's source changes from the dataset to another.
      */
     cautions: json('cautions').$type<FitWarning[]>(),
     createdAt: datetime('created_at', { mode: 'date', fsp: 3 }).notNull(),

@@ -35,7 +35,7 @@ const toAssumption = ({ a, cautions, ownerName, usage }: { a: Omit<AssumptionRow
   ownerId: a.ownerId,
   ownerName,
   notes: a.notes,
-  cautions: a.sourceKind === 'dataset' ? (cautions ?? []) : [],
+  cautions: cautions ?? [],
   usageCount: usage,
   updatedAt: a.updatedAt.toISOString(),
   version: a.version,
@@ -108,10 +108,13 @@ export async function updateAssumption(ctx: AppContext, row: AssumptionRow, patc
   await assertOwner(ctx, row.engagementId, fields.ownerId);
   let moved: MovedNumber[];
   try {
+    // A fit's cautions describe the dataset: a value that stops naming the dataset as its source
+    // loses them, and the blocks linking it are recomputed without them.
+    const cautionsDropped = row.cautions !== null && fields.sourceKind !== undefined && fields.sourceKind !== 'dataset';
     moved = await ctx.db.transaction(async (tx) => {
       const [res] = await tx
         .update(assumptions)
-        .set({ ...fields, updatedAt: new Date(), version: sql`${assumptions.version} + 1` })
+        .set({ ...fields, ...(cautionsDropped ? { cautions: null } : {}), updatedAt: new Date(), version: sql`${assumptions.version} + 1` })
         .where(and(eq(assumptions.id, row.id), eq(assumptions.version, version)));
       if (res.affectedRows !== 1) {
         const [now] = await tx.select({ version: assumptions.version }).from(assumptions).where(eq(assumptions.id, row.id));
@@ -120,9 +123,7 @@ export async function updateAssumption(ctx: AppContext, row: AssumptionRow, patc
         ]);
       }
       const numbersChange = (fields.value !== undefined && fields.value !== row.value) || (fields.unit !== undefined && fields.unit !== row.unit);
-      // A dataset's cautions hold only while the dataset is the source (register.ts): blocks drop them.
-      const cautionsChange = row.cautions !== null && fields.sourceKind !== undefined && fields.sourceKind !== row.sourceKind;
-      return numbersChange || cautionsChange ? propagateChange(tx, row.engagementId, row.id) : [];
+      return numbersChange || cautionsDropped ? propagateChange(tx, row.engagementId, row.id) : [];
     });
   } catch (err) {
     if (isDuplicate(err)) throw duplicateName(fields.name ?? row.name);

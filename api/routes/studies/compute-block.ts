@@ -41,8 +41,8 @@ export function computeBlock(blockId: string, config: BlockConfig, register: Reg
   const base = resolveSpec(config.spec, config.timeUnit, register);
   const main = run(base);
   const cautions = main.result ? linkCautions(config.spec, register) : [];
-  if (main.result && cautions.length > 0) {
-    const own = Array.isArray(main.result.warnings) ? main.result.warnings : [];
+  if (cautions.length > 0) {
+    const own = Array.isArray(main.result!.warnings) ? main.result!.warnings : [];
     main.result = { ...main.result, warnings: [...own, ...cautions] };
   }
   const ids = new Set(base.assumptionIds);

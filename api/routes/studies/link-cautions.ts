@@ -24,7 +24,6 @@ function bears(code: FitWarning['code'], model: string, input: string): boolean 
       // A per-interval model takes its rates per interval; a single rate stands for a steady stream.
       return input === 'arrivalRate' && model !== 'interval-staffing';
     case 'small_sample':
-    case 'few_per_interval':
       return true;
     default:
       return false;

@@ -11,7 +11,7 @@ export interface RegisterEntry {
   value: number;
   unit: UnitCode;
   version: number;
-  /** Warnings of the dataset fit the value came from (register.ts); none for other sources. */
+  /** Warnings of the dataset fit the value came from (assumptions.cautions); none for other sources. */
   cautions?: FitWarning[];
 }
 export type Register = ReadonlyMap<number, RegisterEntry>;

@@ -104,7 +104,6 @@ const CAUTION_WORDS: Record<string, string> = {
   exponential_doubtful: 'exponential service doubtful',
   variable_demand: 'demand varies by interval',
   small_sample: 'few observations',
-  few_per_interval: 'few arrivals per interval',
 };
 
 function FitCautions({ cautions }: { cautions: Assumption['cautions'] }) {

@@ -8,6 +8,7 @@ import { blockUnitsQuery } from '../api/assumption-queries';
 import type { SavedChange } from './assumption-dialog';
 import { MovedBlock } from './moved-block';
 import { ValueWithUnit } from './value-with-unit';
+import { plural } from '../../../lib/plural';
 
 /** Moved numbers grouped by study, then by block, in the order the server listed them. */
 function group(moved: MovedNumber[]) {
@@ -21,8 +22,6 @@ function group(moved: MovedNumber[]) {
   }
   return [...studies].map(([id, s]) => ({ id, title: s.title, blocks: [...s.blocks].map(([blockId, b]) => ({ blockId, ...b })) }));
 }
-
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 /**
  * What an edit did to the studies: every number that moved, before → after, per block. It takes

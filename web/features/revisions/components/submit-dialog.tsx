@@ -4,6 +4,7 @@ import { paths } from '../../../app/paths';
 import { Banner } from '../../../components/ui/banner';
 import { Button } from '../../../components/ui/button';
 import type { TemplateLeftovers } from '#shared/editor/template-leftovers';
+import { plural } from '../../../lib/plural';
 
 interface SubmitDialogProps {
   number: number;
@@ -81,15 +82,13 @@ export function SubmitDialog({ number, leftovers, working, error, submitted, onC
   );
 }
 
-const plural = (n: number, one: string, many: string): string => `${n} ${n === 1 ? one : many}`;
-
 /** What of the template is still in the text; it would reach the partner and, once released, the client's PDF. */
 function LeftoversNotice({ leftovers }: { leftovers: TemplateLeftovers }) {
   const { guidance, placeholders } = leftovers;
   if (guidance === 0 && placeholders.length === 0) return null;
   const parts = [
-    guidance > 0 && `${plural(guidance, 'paragraph', 'paragraphs')} of template guidance (starting “Guidance:”)`,
-    placeholders.length > 0 && `${plural(placeholders.length, 'placeholder', 'placeholders')} still to fill in (${placeholders.slice(0, 4).join(', ')}${placeholders.length > 4 ? ', …' : ''})`,
+    guidance > 0 && `${plural(guidance, 'paragraph')} of template guidance (starting “Guidance:”)`,
+    placeholders.length > 0 && `${plural(placeholders.length, 'placeholder')} still to fill in (${placeholders.slice(0, 4).join(', ')}${placeholders.length > 4 ? ', …' : ''})`,
   ].filter(Boolean);
   return (
     <Banner tone="warn" title="Template text left in the study">

@@ -1,4 +1,5 @@
 import type { TemplateSummary } from '#shared/schemas/studies';
+import { plural } from '../../../lib/plural';
 
 /** The value that stands for "start from an empty document". */
 export const BLANK_CHOICE = '';
@@ -8,8 +9,6 @@ interface TemplateChoiceProps {
   value: string;
   onChange: (key: string) => void;
 }
-
-const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
 /**
  * Radio cards: native radios keep arrow-key movement and screen-reader grouping; the card is
